@@ -1,0 +1,40 @@
+// Which parts of the table would work? Sizes the spec afresh with every transistor (and, for
+// diode clamps, every diode) and ranks the combinations: passing first, then by the smallest
+// margin over all checks (largest first: the most robust design), then by lower pin current,
+// then by ids, so the order is stable and deterministic.
+#pragma once
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "coilfit/parts.hpp"
+#include "coilfit/report.hpp"
+#include "coilfit/spec.hpp"
+
+namespace coilfit {
+
+struct Candidate {
+    std::string transistor;
+    std::string diode;                  // empty for clamp "none"
+    std::string family;                 // "small-signal", "medium-power", "darlington"
+    std::optional<double> base_resistor_ohm;
+    Verdict verdict = Verdict::fail;    // pass | fail
+    std::string worst_check;            // id of the check with the smallest margin
+    double worst_margin = 0;
+    double pin_current_max_a = 0;
+    std::vector<std::string> failed;    // ids of failed checks
+};
+
+struct PickResult {
+    std::vector<Candidate> candidates;  // best first
+    // When nothing passes: one line per transistor family saying why.
+    std::vector<std::string> reasons;
+};
+
+// The transistor family used to group reasons.
+[[nodiscard]] std::string transistor_family(const Bipolar& part);
+
+[[nodiscard]] PickResult pick(const Spec& spec, const Catalogue& catalogue);
+
+}  // namespace coilfit

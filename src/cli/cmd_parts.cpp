@@ -1,0 +1,137 @@
+#include <fmt/format.h>
+
+#include "cli/commands.hpp"
+#include "io/format.hpp"
+
+namespace coilfit::cli {
+namespace {
+
+using io::pad_right;
+
+std::string q(double v, Unit u) { return format_quantity(v, u); }
+
+// A plain aligned table: header row, then rows.
+std::string table_text(const std::vector<std::vector<std::string>>& rows) {
+    std::vector<std::size_t> w;
+    for (const auto& r : rows) {
+        if (w.size() < r.size()) w.resize(r.size(), 0);
+        for (std::size_t i = 0; i < r.size(); ++i) w[i] = std::max(w[i], io::display_width(r[i]));
+    }
+    std::string out;
+    for (const auto& r : rows) {
+        std::string line = " ";
+        for (std::size_t i = 0; i < r.size(); ++i) line += " " + (i + 1 < r.size() ? pad_right(r[i], w[i]) : r[i]);
+        out += line + "\n";
+    }
+    return out;
+}
+
+bool diode_kind_matches(const Diode& d, const std::string& kind) {
+    return kind.empty() || kind == "diode" || kind == diode_kind_name(d.kind);
+}
+
+}  // namespace
+
+CLI::App* setup_parts(CLI::App& app, PartsOptions& options) {
+    CLI::App* cmd = app.add_subcommand("parts", "list the parts table, or show one part");
+    cmd->add_option("kind", options.kind,
+                    "npn, darlington, transistor, diode, rectifier, fast, signal, schottky, zener, coil or pin; or a part id");
+    cmd->add_option("id", options.id, "a part id to show in full");
+    add_common_options(*cmd, options.common, false);
+    return cmd;
+}
+
+int run_parts(const PartsOptions& options) {
+    const io::PartsTable table = load_table(options.common);
+    const Catalogue& cat = table.catalogue;
+    static const std::vector<std::string> kinds{"npn", "darlington", "transistor", "diode", "rectifier", "fast",
+                                                "signal", "schottky", "zener", "coil", "pin"};
+    std::string kind = options.kind;
+    std::string id = options.id;
+    if (!kind.empty() && std::find(kinds.begin(), kinds.end(), kind) == kinds.end()) {
+        if (!id.empty()) throw InputError("parts: unknown kind \"" + kind + "\"; expected one of npn, darlington, transistor, diode, rectifier, fast, signal, schottky, zener, coil, pin");
+        id = kind;  // `coilfit parts 2N4401`
+        kind.clear();
+    }
+    const bool want_bipolar = kind.empty() || kind == "npn" || kind == "darlington" || kind == "transistor";
+    const bool want_zener = kind.empty() || kind == "zener";
+    const bool want_preset = kind.empty() || kind == "coil" || kind == "pin";
+
+    io::Json out = io::Json::object();
+    io::Json bip = io::Json::array();
+    io::Json dio = io::Json::array();
+    io::Json zen = io::Json::array();
+    io::Json pre = io::Json::array();
+    std::vector<std::vector<std::string>> bip_rows{{"id", "kind", "Ic max", "Vceo", "hFE min (at Ic)", "Pd", "package"}};
+    std::vector<std::vector<std::string>> dio_rows{{"id", "kind", "VRRM", "IF(AV)", "peak", "Vf max (at IF)"}};
+    std::vector<std::vector<std::string>> zen_rows{{"id", "Vz", "tolerance", "Pd", "package"}};
+    std::vector<std::vector<std::string>> pre_rows{{"id", "kind", "description"}};
+    std::size_t found = 0;
+
+    for (const auto& b : cat.bipolars) {
+        if (!want_bipolar || (!id.empty() && b.id != id)) continue;
+        if ((kind == "npn" || kind == "darlington") && bipolar_kind_name(b.kind) != kind) continue;
+        ++found;
+        bip.push_back(io::to_json(b));
+        std::string gains;
+        for (const auto& g : b.hfe_min) gains += (gains.empty() ? "" : ", ") + format_quantity(g.hfe_min, Unit::number) + " at " + q(g.ic_a, Unit::ampere);
+        bip_rows.push_back({b.id, std::string(bipolar_kind_name(b.kind)), q(b.ic_max_a, Unit::ampere), q(b.vceo_v, Unit::volt), gains,
+                            q(b.pd_w, Unit::watt), b.package});
+    }
+    for (const auto& d : cat.diodes) {
+        if (!(kind.empty() || diode_kind_matches(d, kind)) || (!id.empty() && d.id != id)) continue;
+        if (kind == "npn" || kind == "darlington" || kind == "transistor" || kind == "zener" || kind == "coil" || kind == "pin") continue;
+        ++found;
+        dio.push_back(io::to_json(d));
+        const std::string peak = d.ifrm_a ? q(*d.ifrm_a, Unit::ampere) + " rep." : d.ifsm_a ? q(*d.ifsm_a, Unit::ampere) + " surge" : "-";
+        std::string vf;
+        for (const auto& f : d.vf) vf += (vf.empty() ? "" : ", ") + q(f.vf_max_v, Unit::volt) + " at " + q(f.if_a, Unit::ampere);
+        dio_rows.push_back({d.id, std::string(diode_kind_name(d.kind)), q(d.vrrm_v, Unit::volt), q(d.if_avg_a, Unit::ampere), peak, vf});
+    }
+    for (const auto& z : cat.zeners) {
+        if (!want_zener || (!id.empty() && z.id != id)) continue;
+        ++found;
+        zen.push_back(io::to_json(z));
+        zen_rows.push_back({z.id, q(z.vz_v, Unit::volt), q(z.tolerance, Unit::ratio), q(z.pd_w, Unit::watt), z.package});
+    }
+    for (const auto& p : table.presets) {
+        if (!want_preset || (!kind.empty() && p.kind != kind) || (!id.empty() && p.id != id)) continue;
+        ++found;
+        io::Json pj = {{"id", p.id}, {"kind", p.kind}, {"description", p.description}};
+        for (const auto& [k, v] : p.fields.items()) pj[k] = v;
+        pj["source"] = p.source;
+        pre.push_back(pj);
+        pre_rows.push_back({p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")});
+    }
+    if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + id + "\" in the table");
+
+    if (options.common.format == "json") {
+        out["transistors"] = bip;
+        out["diodes"] = dio;
+        out["zeners"] = zen;
+        out["presets"] = pre;
+        emit(out.dump(2) + "\n", "");
+        return exit_pass;
+    }
+    std::string text;
+    if (!id.empty()) {
+        // One part in full: its record as JSON is the clearest full view.
+        for (const auto* list : {&bip, &dio, &zen, &pre}) {
+            for (const auto& r : *list) text += r.dump(2) + "\n";
+        }
+        emit(text, "");
+        return exit_pass;
+    }
+    if (bip_rows.size() > 1) text += fmt::format("Transistors ({})\n", bip_rows.size() - 1) + table_text(bip_rows) + "\n";
+    if (dio_rows.size() > 1) text += fmt::format("Diodes ({})\n", dio_rows.size() - 1) + table_text(dio_rows) + "\n";
+    if (zen_rows.size() > 1) text += fmt::format("Zeners ({})\n", zen_rows.size() - 1) + table_text(zen_rows) + "\n";
+    if (pre_rows.size() > 1) text += fmt::format("Presets ({})\n", pre_rows.size() - 1) + table_text(pre_rows) + "\n";
+    text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n";
+    text += "Read from: ";
+    for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + table.files[i];
+    text += "\n";
+    emit(text, "");
+    return exit_pass;
+}
+
+}  // namespace coilfit::cli

@@ -1,0 +1,86 @@
+#include <fmt/format.h>
+
+#include "cli/commands.hpp"
+#include "coilfit/pick.hpp"
+#include "io/format.hpp"
+#include "io/report_io.hpp"
+
+namespace coilfit::cli {
+
+CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
+    CLI::App* cmd = app.add_subcommand("pick", "try every transistor (and diode) of the parts table against a spec; list the passing ones first");
+    add_spec_options(*cmd, options.spec);
+    add_common_options(*cmd, options.common, true);
+    cmd->add_option("--top", options.top, "list only the best N combinations (default: all)");
+    return cmd;
+}
+
+int run_pick(const PickOptions& options) {
+    const io::PartsTable table = load_table(options.common);
+    const Spec spec = io::read_spec(build_spec_document(options.spec), table);
+    const PickResult result = pick(spec, table.catalogue);
+    const std::size_t n = options.top == 0 ? result.candidates.size() : std::min(options.top, result.candidates.size());
+    const bool any_pass = !result.candidates.empty() && result.candidates.front().verdict == Verdict::pass;
+
+    std::string text;
+    if (options.common.format == "json") {
+        io::Json j;
+        io::Json list = io::Json::array();
+        for (std::size_t i = 0; i < n; ++i) {
+            const Candidate& c = result.candidates[i];
+            io::Json cj;
+            cj["transistor"] = c.transistor;
+            cj["diode"] = c.diode.empty() ? io::Json(nullptr) : io::Json(c.diode);
+            cj["base_resistor_ohm"] = c.base_resistor_ohm ? io::Json(*c.base_resistor_ohm) : io::Json(nullptr);
+            cj["verdict"] = verdict_name(c.verdict);
+            cj["worst_check"] = c.worst_check;
+            cj["worst_margin"] = c.worst_margin;
+            cj["family"] = c.family;
+            cj["failed_checks"] = c.failed;
+            list.push_back(cj);
+        }
+        j["candidates"] = list;
+        j["reasons"] = result.reasons;
+        text = j.dump(2) + "\n";
+    } else {
+        io::TextStyle style;
+        style.color = use_color(options.common.output);
+        std::vector<std::array<std::string, 7>> rows;
+        rows.push_back({"#", "transistor", "diode", "base resistor", "worst check", "margin", "verdict"});
+        for (std::size_t i = 0; i < n; ++i) {
+            const Candidate& c = result.candidates[i];
+            rows.push_back({std::to_string(i + 1), c.transistor, c.diode.empty() ? "-" : c.diode,
+                            c.base_resistor_ohm ? format_quantity(*c.base_resistor_ohm, Unit::ohm) : "none",
+                            c.worst_check, fmt::format("{:+.0f} %", c.worst_margin * 100.0),
+                            c.verdict == Verdict::pass ? "pass" : "FAIL"});
+        }
+        std::array<std::size_t, 7> w{};
+        for (const auto& r : rows)
+            for (std::size_t k = 0; k < r.size(); ++k) w[k] = std::max(w[k], io::display_width(r[k]));
+        const std::size_t passing = static_cast<std::size_t>(std::count_if(
+            result.candidates.begin(), result.candidates.end(), [](const Candidate& c) { return c.verdict == Verdict::pass; }));
+        text += fmt::format("coilfit pick - {}: {} of {} combinations pass at worst case\n\n",
+                            spec.name.empty() ? std::string("unnamed channel") : spec.name, passing, result.candidates.size());
+        for (std::size_t r = 0; r < rows.size(); ++r) {
+            std::string line = " ";
+            for (std::size_t k = 0; k < rows[r].size(); ++k) {
+                const std::string cell = (k == 0 || k == 5) ? io::pad_left(rows[r][k], w[k]) : io::pad_right(rows[r][k], w[k]);
+                if (k == 6 && r > 0) line += " " + io::paint(cell, result.candidates[r - 1].verdict, style);
+                else line += " " + cell;
+            }
+            while (!line.empty() && line.back() == ' ') line.pop_back();
+            text += line + "\n";
+        }
+        if (n < result.candidates.size()) text += fmt::format("  ... {} more (--top 0 lists all)\n", result.candidates.size() - n);
+        if (!result.reasons.empty()) {
+            text += "\nNothing passes:\n";
+            for (const auto& r : result.reasons) text += "  - " + io::wrap(r, text_width() - 4, 4) + "\n";
+        }
+        text += "\nRanked by the smallest margin over all checks; size one with `coilfit size SPEC --transistor ID --diode ID`.\n"
+                "Values are typical datasheet limits from memory; confirm against the datasheets in use.\n";
+    }
+    emit(text, options.common.output);
+    return any_pass ? exit_pass : exit_fail;
+}
+
+}  // namespace coilfit::cli

@@ -1,0 +1,153 @@
+#include "cli/common.hpp"
+
+#include <unistd.h>
+
+#include <cstdio>
+#include <cstdlib>
+#include <filesystem>
+#include <fstream>
+#include <iostream>
+
+namespace coilfit::cli {
+namespace {
+
+struct SpecFlag {
+    const char* flag;
+    const char* path;
+    const char* help;
+};
+
+// Our own flag names; each sets one field of the spec (coilfit.spec/1).
+constexpr SpecFlag spec_flags[] = {
+    {"--name", "name", "channel name for the report"},
+    {"--supply", "supply.voltage", "coil supply voltage, e.g. 12V"},
+    {"--supply-tolerance", "supply.tolerance", "supply tolerance, e.g. 10%"},
+    {"--ambient-min", "ambient.min", "lowest ambient, e.g. -20C"},
+    {"--ambient-max", "ambient.max", "highest ambient, e.g. 50C"},
+    {"--coil-preset", "coil.preset", "start the coil from a preset of the parts table"},
+    {"--coil-voltage", "coil.rated_voltage", "coil rated voltage, e.g. 12V"},
+    {"--coil-resistance", "coil.resistance", "coil resistance at its reference temperature, e.g. 400R"},
+    {"--coil-tolerance", "coil.tolerance", "coil resistance tolerance, e.g. 10%"},
+    {"--coil-reference-temp", "coil.reference_temp", "temperature of the coil resistance figure, e.g. 20C"},
+    {"--must-operate", "coil.must_operate", "must-operate voltage in % of rated, e.g. 75%"},
+    {"--must-release", "coil.must_release", "must-release voltage in % of rated, e.g. 10%"},
+    {"--coil-inductance", "coil.inductance", "coil inductance, armature energised, e.g. 0.9H"},
+    {"--self-heating", "coil.self_heating", "coil winding rise above ambient, e.g. 15K"},
+    {"--coil-max-voltage", "coil.max_voltage", "highest continuous coil voltage, e.g. 15.6V"},
+    {"--max-release-time", "coil.max_release_time", "longest acceptable release time, e.g. 10ms"},
+    {"--pin-preset", "pin.preset", "start the pin from a preset of the parts table"},
+    {"--pin-vdd", "pin.vdd", "pin supply (VDD), e.g. 3.3V"},
+    {"--pin-vdd-tolerance", "pin.vdd_tolerance", "pin supply tolerance, e.g. 5%"},
+    {"--pin-voh", "pin.voh", "guaranteed output high voltage at --pin-voh-current, e.g. 2.9V"},
+    {"--pin-voh-current", "pin.voh_current", "current of the VOH rating, e.g. 8mA"},
+    {"--pin-max-current", "pin.max_current", "most the pin may source, e.g. 8mA"},
+    {"--transistor", "transistor", "transistor id from the parts table, e.g. 2N4401"},
+    {"--clamp", "clamp.type", "clamp: diode, diode_zener, diode_resistor or none"},
+    {"--diode", "clamp.diode", "clamp diode id, e.g. 1N4148"},
+    {"--zener", "clamp.zener", "zener id for a diode_zener clamp"},
+    {"--clamp-resistor", "clamp.resistor", "resistor of a diode_resistor clamp, e.g. 470R"},
+    {"--series", "base_resistor.series", "E-series of the base resistor: E3 .. E192"},
+    {"--resistor-tolerance", "base_resistor.tolerance", "base resistor tolerance, e.g. 1%"},
+    {"--resistor-power", "base_resistor.power_rating", "base resistor power rating, e.g. 0.25W"},
+    {"--base-resistor", "base_resistor.value", "fix the base resistor and check it, e.g. 1k2"},
+    {"--pulldown", "pulldown", "base-emitter pull-down, e.g. 47k"},
+    {"--forced-gain", "policy.forced_gain", "forced gain Ic/Ib for saturation (default 10)"},
+    {"--overdrive", "policy.overdrive", "base drive over minimum gain (default 2)"},
+    {"--current-derating", "policy.current_derating", "transistor current derating (default 75%)"},
+    {"--voltage-derating", "policy.voltage_derating", "transistor and diode voltage derating (default 75%)"},
+    {"--junction-margin", "policy.junction_margin", "margin below Tj max (default 25K)"},
+    {"--power-derating", "policy.power_derating", "resistor and zener power derating (default 50%)"},
+    {"--vbe-low", "policy.vbe_low", "lowest Vbe, for the highest pin current (default 0.6V)"},
+    {"--frequency", "switching.frequency", "switching frequency, e.g. 1Hz"},
+    {"--load-voltage", "load.voltage", "voltage the contacts switch, e.g. 230V"},
+    {"--load-kind", "load.kind", "ac or dc"},
+    {"--load-current", "load.current", "current the contacts switch, e.g. 2A"},
+};
+constexpr std::size_t spec_flag_count = sizeof(spec_flags) / sizeof(spec_flags[0]);
+
+}  // namespace
+
+void add_spec_options(CLI::App& app, SpecOptions& options) {
+    app.add_option("spec", options.spec_path, "spec file (coilfit.spec/1), or - for standard input; optional when flags give the whole spec");
+    options.storage.resize(spec_flag_count);
+    for (std::size_t i = 0; i < spec_flag_count; ++i) {
+        const SpecFlag& f = spec_flags[i];
+        auto* opt = app.add_option(f.flag, options.storage[i], f.help)->group("Spec fields (override the file)");
+        const std::string path = f.path;
+        const std::string flag = f.flag;
+        opt->each([&options, path, flag](const std::string& value) {
+            options.values.emplace_back(path, value);
+            options.flag_of.emplace_back(path, flag);
+        });
+    }
+}
+
+void add_common_options(CLI::App& app, CommonOptions& options, bool with_output) {
+    app.add_option("--parts", options.parts_path, "parts table file or folder (default: $COILFIT_PARTS, else the installed table)");
+    app.add_option("--format", options.format, "output format: text or json")->check(CLI::IsMember({"text", "json"}));
+    if (with_output) app.add_option("--output,-o", options.output, "write the report to FILE (atomically) instead of standard output");
+}
+
+io::SpecDocument build_spec_document(const SpecOptions& options) {
+    io::SpecDocument d = options.spec_path.empty() ? io::flags_only_document() : io::load_spec_document(options.spec_path);
+    if (options.spec_path.empty() && options.values.empty()) {
+        throw InputError("no spec: give a spec file (or - for standard input), or the spec fields as flags; see --help");
+    }
+    for (std::size_t i = 0; i < options.values.size(); ++i) {
+        io::set_field(d, options.values[i].first, options.values[i].second, options.flag_of[i].second);
+    }
+    return d;
+}
+
+io::PartsTable load_table(const CommonOptions& options) {
+    return io::load_parts(io::resolve_parts_path(options.parts_path));
+}
+
+void emit(const std::string& text, const std::string& output_path) {
+    if (output_path.empty()) {
+        std::cout << text;
+        std::cout.flush();
+        if (!std::cout) throw InputError("cannot write to standard output");
+        return;
+    }
+    namespace fs = std::filesystem;
+    const fs::path target(output_path);
+    fs::path dir = target.parent_path();
+    if (dir.empty()) dir = ".";
+    const fs::path tmp = dir / (target.filename().string() + ".tmp." + std::to_string(::getpid()));
+    {
+        std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
+        if (!out) throw InputError(output_path + ": cannot write here (" + dir.string() + ")");
+        out << text;
+        out.flush();
+        if (!out) {
+            out.close();
+            std::error_code ec;
+            fs::remove(tmp, ec);
+            throw InputError(output_path + ": writing failed; nothing was written");
+        }
+    }
+    std::error_code ec;
+    fs::rename(tmp, target, ec);
+    if (ec) {
+        fs::remove(tmp, ec);
+        throw InputError(output_path + ": cannot replace the file: " + ec.message());
+    }
+}
+
+bool use_color(const std::string& output_path) {
+    if (!output_path.empty()) return false;
+    if (const char* nc = std::getenv("NO_COLOR"); nc && *nc) return false;
+    if (const char* term = std::getenv("TERM"); term && std::string(term) == "dumb") return false;
+    return ::isatty(STDOUT_FILENO) == 1;
+}
+
+std::size_t text_width() {
+    if (const char* c = std::getenv("COLUMNS")) {
+        const long n = std::strtol(c, nullptr, 10);
+        if (n >= 60 && n <= 300) return static_cast<std::size_t>(n);
+    }
+    return 100;
+}
+
+}  // namespace coilfit::cli

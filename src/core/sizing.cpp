@@ -1,0 +1,295 @@
+#include "coilfit/sizing.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <string>
+
+#include "coilfit/clamp.hpp"
+#include "coilfit/copper.hpp"
+
+namespace coilfit {
+namespace {
+
+constexpr std::array<std::string_view, check_count> check_names{
+    "coil.operate",          "coil.overvoltage",   "transistor.current", "transistor.voltage",
+    "transistor.saturation", "transistor.thermal", "pin.current",        "resistor.power",
+    "diode.voltage",         "diode.current",      "clamp.power",        "release.time"};
+
+constexpr std::array<Unit, check_count> check_units{
+    Unit::volt,   Unit::volt,    Unit::ampere, Unit::volt, Unit::number, Unit::celsius,
+    Unit::ampere, Unit::watt,    Unit::volt,   Unit::ampere, Unit::watt, Unit::second};
+
+// value must stay at or below limit
+CheckValue at_most(double value, double limit) {
+    CheckValue c;
+    c.has_value = true;
+    c.value = value;
+    c.limit = limit;
+    c.margin = limit != 0 ? (limit - value) / std::abs(limit) : (value <= limit ? 0.0 : -1.0);
+    c.verdict = value <= limit ? Verdict::pass : Verdict::fail;
+    return c;
+}
+
+// value must stay at or above limit
+CheckValue at_least(double value, double limit) {
+    CheckValue c;
+    c.has_value = true;
+    c.value = value;
+    c.limit = limit;
+    c.margin = limit != 0 ? (value - limit) / std::abs(limit) : (value >= limit ? 0.0 : -1.0);
+    c.verdict = value >= limit ? Verdict::pass : Verdict::fail;
+    return c;
+}
+
+CheckValue failed_without_value(double limit) {
+    CheckValue c;
+    c.verdict = Verdict::fail;
+    c.limit = limit;
+    c.margin = -1.0;
+    return c;
+}
+
+double default_forced_gain(const Spec& spec, double i_max_a) {
+    if (spec.policy.forced_gain) return *spec.policy.forced_gain;
+    // Common practice: datasheets specify Vce(sat) at Ic/Ib = 10, the textbook ratio for hard
+    // saturation. Darlingtons are specified at their own, much higher ratio (e.g. 250 or 1000).
+    if (spec.transistor.kind == BipolarKind::darlington) return vce_sat_test_ratio(spec.transistor, i_max_a);
+    return 10.0;
+}
+
+}  // namespace
+
+std::string_view check_id_name(CheckId id) { return check_names.at(static_cast<std::size_t>(id)); }
+Unit check_unit(CheckId id) { return check_units.at(static_cast<std::size_t>(id)); }
+
+std::string_view verdict_name(Verdict verdict) {
+    switch (verdict) {
+    case Verdict::pass: return "pass";
+    case Verdict::warn: return "warn";
+    case Verdict::fail: return "fail";
+    case Verdict::skip: return "skip";
+    }
+    return "skip";
+}
+
+std::string_view clamp_type_name(ClampType type) {
+    switch (type) {
+    case ClampType::diode: return "diode";
+    case ClampType::diode_zener: return "diode_zener";
+    case ClampType::diode_resistor: return "diode_resistor";
+    case ClampType::none: return "none";
+    }
+    return "none";
+}
+
+Conditions worst_case_conditions(const Spec& spec) {
+    Conditions c;
+    c.vs_lo_v = spec.supply.voltage_v * (1.0 - spec.supply.tolerance);
+    c.vs_hi_v = spec.supply.voltage_v * (1.0 + spec.supply.tolerance);
+    c.ta_lo_c = spec.ambient.min_c;
+    c.ta_hi_c = spec.ambient.max_c;
+    c.vdd_lo_v = spec.pin.vdd_v * (1.0 - spec.pin.vdd_tolerance);
+    c.vdd_hi_v = spec.pin.vdd_v * (1.0 + spec.pin.vdd_tolerance);
+    c.r_coil_lo_ohm = spec.coil.resistance_ohm * (1.0 - spec.coil.tolerance);
+    c.r_coil_hi_ohm = spec.coil.resistance_ohm * (1.0 + spec.coil.tolerance);
+    c.rb_lo_factor = 1.0 - spec.base_resistor.tolerance;
+    c.rb_hi_factor = 1.0 + spec.base_resistor.tolerance;
+    if (spec.clamp.zener) {
+        c.vz_lo_v = spec.clamp.zener->vz_v * (1.0 - spec.clamp.zener->tolerance);
+        c.vz_hi_v = spec.clamp.zener->vz_v * (1.0 + spec.clamp.zener->tolerance);
+    }
+    c.hfe_position = 0.0;
+    return c;
+}
+
+bool Evaluation::passes() const {
+    return std::none_of(checks.begin(), checks.end(),
+                        [](const CheckValue& c) { return c.verdict == Verdict::fail; });
+}
+
+Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
+    Evaluation e;
+    const CoilSpec& coil = spec.coil;
+    const Bipolar& tr = spec.transistor;
+    const Policy& policy = spec.policy;
+    auto set = [&e](CheckId id, CheckValue v) { e.checks[static_cast<std::size_t>(id)] = v; };
+
+    // --- Coil (method.md "Corners"; copper law IEC 60028) ---
+    e.coil_temp_hot_c = c.ta_hi_c + coil.self_heating_k;
+    e.r_coil_cold_ohm = c.r_coil_lo_ohm * copper_factor(coil.reference_temp_c, c.ta_lo_c);
+    e.r_coil_hot_ohm = c.r_coil_hi_ohm * copper_factor(coil.reference_temp_c, e.coil_temp_hot_c);
+    // Ohm's law at nominal supply and reference resistance, for orientation.
+    e.coil_current_nominal_a = spec.supply.voltage_v / coil.resistance_ohm;
+    // Highest current: highest supply into the coldest, lowest coil (Vce(sat) neglected).
+    e.coil_current_max_a = c.vs_hi_v / e.r_coil_cold_ohm;
+    const Lookup vce = vce_sat_at(tr, e.coil_current_max_a);
+    e.vce_sat_v = vce.value;
+    e.vce_outside = vce.outside;
+    // Lowest coil voltage: lowest supply less the saturation voltage.
+    e.coil_voltage_min_v = c.vs_lo_v - e.vce_sat_v;
+    e.coil_voltage_max_v = c.vs_hi_v;
+    e.coil_current_min_a = std::max(0.0, e.coil_voltage_min_v) / e.r_coil_hot_ohm;
+    // Must-operate is an ampere-turn threshold: it rises with the hot coil's copper factor.
+    e.operate_voltage_hot_v =
+        coil.must_operate * coil.rated_voltage_v * copper_factor(coil.reference_temp_c, e.coil_temp_hot_c);
+    e.release_current_a = coil.must_release * coil.rated_voltage_v / coil.resistance_ohm;
+
+    set(CheckId::coil_operate, at_least(e.coil_voltage_min_v, e.operate_voltage_hot_v));
+    if (coil.max_voltage_v) set(CheckId::coil_overvoltage, at_most(e.coil_voltage_max_v, *coil.max_voltage_v));
+
+    // --- Base drive (method.md "Base drive") ---
+    const Lookup hfe_min = hfe_min_at(tr, e.coil_current_max_a);
+    e.hfe_min = hfe_min.value;
+    e.hfe_outside = hfe_min.outside;
+    e.hfe = e.hfe_min;
+    if (c.hfe_position > 0) {
+        const double typ = hfe_typ_at(tr, e.coil_current_max_a).value;
+        e.hfe = e.hfe_min + c.hfe_position * (std::max(typ, e.hfe_min) - e.hfe_min);
+    }
+    e.forced_gain_policy = default_forced_gain(spec, e.coil_current_max_a);
+    e.beta_target = std::min(e.forced_gain_policy, e.hfe / policy.overdrive);
+    e.base_current_required_a = e.coil_current_max_a / e.beta_target;
+    // The minimum gain this pin can serve: k * I_max / I_pin (common practice).
+    e.hfe_needed = policy.overdrive * e.coil_current_max_a / spec.pin.max_current_a;
+    const Lookup vbe = vbe_sat_at(tr, e.coil_current_max_a);
+    e.vbe_sat_v = vbe.value;
+    e.vbe_outside = vbe.outside;
+    e.vce_sat_test_ratio = vce_sat_test_ratio(tr, e.coil_current_max_a);
+    e.vce_sat_not_guaranteed = e.beta_target > e.vce_sat_test_ratio * (1.0 + 1e-9);
+    // Pin as a Thevenin source: R_out = (VDD - VOH) / IOH.
+    if (spec.pin.voh_v && spec.pin.voh_current_a && *spec.pin.voh_current_a > 0) {
+        e.pin_r_out_ohm = std::max(0.0, (spec.pin.vdd_v - *spec.pin.voh_v) / *spec.pin.voh_current_a);
+    }
+    e.pulldown_current_a = spec.pulldown_ohm ? e.vbe_sat_v / *spec.pulldown_ohm : 0.0;
+    // Rb_max = [(VDD_lo - Vbe_sat) / (Ib_req + Vbe_sat/Rbe) - R_out] / (1 + tb)
+    e.base_resistor_max_ohm =
+        ((c.vdd_lo_v - e.vbe_sat_v) / (e.base_current_required_a + e.pulldown_current_a) - e.pin_r_out_ohm) /
+        c.rb_hi_factor;
+    // Rb_min = (VDD_hi - Vbe_low) / (I_pin_limit (1 - tb))
+    e.base_resistor_min_ohm = (c.vdd_hi_v - policy.vbe_low_v) / (spec.pin.max_current_a * c.rb_lo_factor);
+
+    const double derated_vceo = policy.voltage_derating * tr.vceo_v;
+    set(CheckId::transistor_current, at_most(e.coil_current_max_a, policy.current_derating * tr.ic_max_a));
+
+    // --- With the resistor ---
+    e.base_resistor_ohm = rb_ohm;
+    const double tj_limit = tr.tj_max_c - policy.junction_margin_k;
+    if (rb_ohm > 0) {
+        // Lowest base current: VDD_lo, Vbe(sat) max, Rb at +tb, behind R_out, less the pull-down.
+        e.base_current_min_a =
+            (c.vdd_lo_v - e.vbe_sat_v) / (rb_ohm * c.rb_hi_factor + e.pin_r_out_ohm) - e.pulldown_current_a;
+        e.saturates = e.base_current_min_a > 0;
+        // Highest pin current: VDD_hi, Vbe low, Rb at -tb, R_out = 0.
+        e.pin_current_max_a = std::max(0.0, c.vdd_hi_v - policy.vbe_low_v) / (rb_ohm * c.rb_lo_factor);
+        e.resistor_power_w = e.pin_current_max_a * e.pin_current_max_a * rb_ohm * c.rb_lo_factor;
+        if (e.saturates) {
+            e.forced_gain_worst = e.coil_current_max_a / e.base_current_min_a;
+            CheckValue sat = at_most(e.forced_gain_worst, e.beta_target);
+            if (sat.verdict == Verdict::pass && e.vce_sat_not_guaranteed) sat.verdict = Verdict::warn;
+            set(CheckId::transistor_saturation, sat);
+        } else {
+            set(CheckId::transistor_saturation, failed_without_value(e.beta_target));
+        }
+        set(CheckId::pin_current, at_most(e.pin_current_max_a, spec.pin.max_current_a));
+        set(CheckId::resistor_power,
+            at_most(e.resistor_power_w, policy.power_derating * spec.base_resistor.power_rating_w));
+        // Steady-state dissipation P = Vce(sat) Ic + Vbe(sat) Ib; Tj = Ta_hi + P RthJA.
+        const double ib_max = e.pin_current_max_a;
+        e.transistor_power_w = e.vce_sat_v * e.coil_current_max_a + e.vbe_sat_v * ib_max;
+    } else {
+        set(CheckId::transistor_saturation, failed_without_value(e.beta_target));
+        set(CheckId::pin_current, failed_without_value(spec.pin.max_current_a));
+        // Without base drive nothing flows; the thermal figure is taken at full coil current.
+        e.transistor_power_w = e.vce_sat_v * e.coil_current_max_a;
+    }
+    e.junction_temp_max_c = c.ta_hi_c + e.transistor_power_w * rth_ja(tr);
+    set(CheckId::transistor_thermal, at_most(e.junction_temp_max_c, tj_limit));
+
+    // --- Clamp (method.md "Clamp (flyback) and timing") ---
+    const double i0 = e.coil_current_max_a;
+    e.clamp = clamp_voltages(spec.clamp, i0, c.vz_lo_v, c.vz_hi_v);
+    if (e.clamp.limited) {
+        // Peak collector voltage: highest supply plus the highest clamp voltage.
+        e.peak_collector_voltage_v = c.vs_hi_v + e.clamp.peak_v;
+        set(CheckId::transistor_voltage, at_most(e.peak_collector_voltage_v, derated_vceo));
+        const Diode& d = *spec.clamp.diode;
+        // The diode blocks the supply while the transistor conducts: VRRM >= Vs_hi / d_V.
+        set(CheckId::diode_voltage, at_most(c.vs_hi_v, policy.voltage_derating * d.vrrm_v));
+        // Peak forward current: the whole coil current at turn-off, against the repetitive
+        // peak rating (or the surge rating, or the average rating when neither is given).
+        const double i_peak_limit = d.ifrm_a ? *d.ifrm_a : d.ifsm_a ? *d.ifsm_a : d.if_avg_a;
+        set(CheckId::diode_current, at_most(i0, i_peak_limit));
+    } else {
+        set(CheckId::transistor_voltage, failed_without_value(derated_vceo));
+    }
+
+    if (coil.inductance_h && e.clamp.limited) {
+        const double l = *coil.inductance_h;
+        e.has_timing = true;
+        e.stored_energy_j = stored_energy(l, i0);
+        // Timing corner: cold coil (longest tau, highest I0) and the lowest clamp voltage.
+        const double r_loop = e.r_coil_cold_ohm + e.clamp.series_ohm;
+        const Decay slow = rl_decay(l, r_loop, e.clamp.timing_v, i0, e.release_current_a);
+        e.release_time_s = slow.release_time_s;
+        e.current_zero_time_s = slow.end_time_s;
+        e.clamp_charge_c = slow.charge_c;
+        // Energy corner: the highest clamp voltage takes the largest share of the stored energy.
+        const double vc_energy = spec.clamp.type == ClampType::diode_resistor
+                                     ? e.clamp.peak_v - i0 * e.clamp.series_ohm
+                                     : e.clamp.peak_v;
+        const Decay hot = rl_decay(l, r_loop, vc_energy, i0, e.release_current_a);
+        e.clamp_energy_j = clamp_energy(hot, vc_energy, e.clamp.series_ohm);
+        if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));
+        if (spec.switching_frequency_hz) {
+            const double f = *spec.switching_frequency_hz;
+            e.has_rate = true;
+            e.clamp_power_w = f * e.clamp_energy_j;
+            e.diode_average_current_a = f * slow.charge_c;  // most charge at the lowest clamp voltage
+            const Diode& d = *spec.clamp.diode;
+            // The diode's average-current rating also bounds the repetitive clamp current.
+            CheckValue avg = at_most(e.diode_average_current_a, d.if_avg_a);
+            if (avg.margin < e.check(CheckId::diode_current).margin) set(CheckId::diode_current, avg);
+            switch (spec.clamp.type) {
+            case ClampType::diode_zener: {
+                const double vz_hi = c.vz_hi_v;
+                e.zener_power_w = f * vz_hi * hot.charge_c;
+                set(CheckId::clamp_power, at_most(e.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w));
+                break;
+            }
+            case ClampType::diode_resistor: {
+                e.clamp_resistor_power_w = f * e.clamp.series_ohm * hot.i2_integral;
+                // The clamp resistor's rating is not in the spec; hold it to the base resistor's
+                // policy against a 0.25 W part (common practice for a through-hole resistor).
+                set(CheckId::clamp_power, at_most(e.clamp_resistor_power_w, policy.power_derating * 0.25));
+                break;
+            }
+            case ClampType::diode: {
+                // A diode has no power rating of its own here: its dissipation at the rated
+                // average current, if_avg * Vf(if_avg), stands for it.
+                const double p_rated = d.if_avg_a * vf_max_at(d, d.if_avg_a).value;
+                set(CheckId::clamp_power, at_most(e.clamp_power_w, p_rated));
+                break;
+            }
+            case ClampType::none: break;
+            }
+        }
+    }
+    return e;
+}
+
+std::optional<double> choose_base_resistor(const Spec& spec, const Evaluation& worst) {
+    if (spec.base_resistor.value_ohm) return spec.base_resistor.value_ohm;
+    if (!(worst.base_resistor_max_ohm > 0)) return std::nullopt;
+    return eseries_floor(worst.base_resistor_max_ohm, spec.base_resistor.series);
+}
+
+Sized size_numbers(const Spec& spec) {
+    Sized s;
+    s.conditions = worst_case_conditions(spec);
+    const Evaluation bare = evaluate(spec, s.conditions, 0.0);
+    s.rb_ohm = choose_base_resistor(spec, bare);
+    s.worst = s.rb_ohm ? evaluate(spec, s.conditions, *s.rb_ohm) : bare;
+    return s;
+}
+
+}  // namespace coilfit

@@ -1,0 +1,50 @@
+#include "io/format.hpp"
+
+#include <sstream>
+
+namespace coilfit::io {
+
+std::size_t display_width(std::string_view s) {
+    std::size_t n = 0;
+    for (const char c : s) {
+        if ((static_cast<unsigned char>(c) & 0xC0U) != 0x80U) ++n;  // count lead bytes only
+    }
+    return n;
+}
+
+std::string pad_right(std::string_view s, std::size_t width) {
+    std::string out(s);
+    const std::size_t w = display_width(s);
+    if (w < width) out.append(width - w, ' ');
+    return out;
+}
+
+std::string pad_left(std::string_view s, std::size_t width) {
+    const std::size_t w = display_width(s);
+    std::string out = w < width ? std::string(width - w, ' ') : std::string();
+    out += s;
+    return out;
+}
+
+std::string wrap(std::string_view text, std::size_t width, std::size_t indent) {
+    std::istringstream words{std::string(text)};
+    std::string word;
+    std::string out;
+    std::size_t col = 0;
+    while (words >> word) {
+        const std::size_t w = display_width(word);
+        if (col > 0 && col + 1 + w > width) {
+            out += '\n';
+            out.append(indent, ' ');
+            col = indent;
+        } else if (col > 0) {
+            out += ' ';
+            ++col;
+        }
+        out += word;
+        col += w;
+    }
+    return out;
+}
+
+}  // namespace coilfit::io

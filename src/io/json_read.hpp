@@ -1,0 +1,72 @@
+// Reading JSON with field paths in every message:
+//   spec.json: coil.resistance: expected a resistance such as "400R", got "fourty"
+// nlohmann/json stays in src/io; everything leaving here is a core struct or an InputError.
+#pragma once
+
+#include <map>
+#include <optional>
+#include <set>
+#include <string>
+#include <string_view>
+#include <vector>
+
+#include <nlohmann/json.hpp>
+
+#include "coilfit/quantity.hpp"
+
+namespace coilfit::io {
+
+using Json = nlohmann::ordered_json;
+
+// Where a value came from: the file label for messages and, per field path, the command-line
+// flag that overrode it (so that a bad flag is named as a flag).
+struct Origin {
+    std::string file;                           // "spec.json", "<stdin>", "parts/bipolar.json"
+    std::map<std::string, std::string> flags;   // "supply.voltage" -> "--supply"
+};
+
+[[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);
+
+// Parses JSON text; rejects documents over max_bytes, nested deeper than 64 levels, with
+// invalid UTF-8 or duplicate keys, and says where.
+[[nodiscard]] Json parse_json(std::string_view text, const std::string& file, std::size_t max_bytes);
+// Reads a whole file (or standard input for "-"), at most max_bytes.
+[[nodiscard]] std::string read_text(const std::string& path, std::size_t max_bytes);
+
+// A JSON object read key by key. finish() rejects keys nobody asked for, naming the first.
+class ObjectReader {
+public:
+    ObjectReader(const Json& j, const Origin& origin, std::string path);
+
+    [[nodiscard]] bool has(const std::string& key) const;
+    [[nodiscard]] const Json* get(const std::string& key);  // nullptr when absent or null
+    [[nodiscard]] std::string path_of(const std::string& key) const;
+    [[noreturn]] void fail_at(const std::string& key, const std::string& what) const;
+
+    // A quantity (number in SI, or a string with unit); checks it is finite.
+    [[nodiscard]] std::optional<double> quantity(const std::string& key, Unit unit);
+    [[nodiscard]] double required(const std::string& key, Unit unit);
+    [[nodiscard]] std::optional<std::string> text(const std::string& key, std::size_t max_len = 200);
+    [[nodiscard]] std::string required_text(const std::string& key, std::size_t max_len = 200);
+
+    // Range checks, naming the field: value > 0; lo <= value < hi (fractions); etc.
+    double positive(const std::string& key, double value) const;
+    double non_negative(const std::string& key, double value) const;
+    double fraction(const std::string& key, double value, double lo, double hi, bool hi_inclusive) const;
+    double within(const std::string& key, double value, double lo, double hi) const;
+
+    void finish() const;
+    [[nodiscard]] const Origin& origin() const { return origin_; }
+    [[nodiscard]] const std::string& path() const { return path_; }
+
+private:
+    const Json& j_;
+    const Origin& origin_;
+    std::string path_;
+    std::set<std::string> used_;
+};
+
+// Describes a JSON value briefly for messages: "\"fourty\"", "true", "an object", ...
+[[nodiscard]] std::string describe(const Json& j);
+
+}  // namespace coilfit::io

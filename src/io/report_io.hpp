@@ -1,0 +1,26 @@
+// Rendering a SizingReport: JSON (schema "coilfit.report/1") for scripts, text for people.
+#pragma once
+
+#include <string>
+
+#include "coilfit/report.hpp"
+#include "coilfit/spec.hpp"
+#include "io/json_read.hpp"
+
+namespace coilfit::io {
+
+inline constexpr std::string_view report_schema = "coilfit.report/1";
+
+[[nodiscard]] Json report_to_json(const SizingReport& report, const Spec& spec);
+
+struct TextStyle {
+    bool color = false;       // ANSI colours: only on a terminal, never with NO_COLOR
+    std::size_t width = 100;  // wrap notes to this many columns
+};
+
+// Colours a verdict word (pass green, warn yellow, fail red, skip dim) when style.color.
+[[nodiscard]] std::string paint(std::string_view text, Verdict verdict, const TextStyle& style);
+
+[[nodiscard]] std::string render_text(const SizingReport& report, const Spec& spec, const TextStyle& style);
+
+}  // namespace coilfit::io

@@ -1,0 +1,63 @@
+#include <cmath>
+
+#include "io/report_io.hpp"
+#include "io/spec_io.hpp"
+
+namespace coilfit::io {
+namespace {
+
+Json number_or_null(const std::optional<double>& v) {
+    return v && std::isfinite(*v) ? Json(*v) : Json(nullptr);
+}
+
+}  // namespace
+
+Json report_to_json(const SizingReport& report, const Spec& spec) {
+    Json j;
+    j["schema"] = report_schema;
+    j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
+    j["verdict"] = verdict_name(report.verdict);
+    j["input"] = spec_to_json(spec);
+    Json q = Json::object();
+    for (const auto& e : report.quantities) {
+        if (std::isfinite(e.value)) q[e.key] = e.value;
+    }
+    j["quantities"] = q;
+    Json checks = Json::array();
+    for (const auto& c : report.checks) {
+        Json cj;
+        cj["id"] = c.id;
+        cj["verdict"] = verdict_name(c.verdict);
+        cj["value"] = number_or_null(c.value);
+        cj["limit"] = number_or_null(c.limit);
+        cj["unit"] = unit_symbol(c.unit);
+        cj["margin"] = number_or_null(c.margin);
+        cj["message"] = c.message;
+        checks.push_back(cj);
+    }
+    j["checks"] = checks;
+    j["notes"] = report.notes;
+    j["cautions"] = report.cautions;
+    Json options = Json::array();
+    for (const auto& o : report.clamp_options) {
+        Json oj;
+        oj["clamp"] = o.label;
+        oj["peak_collector_voltage_v"] = o.peak_collector_v;
+        oj["release_time_s"] = number_or_null(o.release_time_s);
+        oj["clamp_energy_j"] = o.clamp_energy_j;
+        oj["within_rating"] = o.within_rating;
+        oj["chosen"] = o.chosen;
+        options.push_back(oj);
+    }
+    Json resistor;
+    resistor["value_ohm"] = number_or_null(report.resistor.value_ohm);
+    resistor["series"] = eseries_name(report.resistor.series);
+    resistor["tolerance"] = report.resistor.tolerance;
+    resistor["power_rating_w"] = report.resistor.power_rating_w;
+    resistor["fixed"] = report.resistor.fixed;
+    j["base_resistor"] = resistor;
+    j["clamp_options"] = options;
+    return j;
+}
+
+}  // namespace coilfit::io
