@@ -266,6 +266,11 @@ double parse_quantity(std::string_view text, Unit expected) {
             if (expected != Unit::ratio) fail(expected, text, "a percentage");
             factor = 0.01;
             found = Unit::ratio;
+        } else if (expected == Unit::ohm && rest.front() == 'K' &&
+                   (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
+            // "33K" and "2.2KΩ" for kilo-ohms are common on resistor labels.
+            factor = 1e3;
+            if (rest.size() > 1) found = Unit::ohm;
         } else if (const auto plain = match_symbol(rest)) {
             found = plain;
         } else {
@@ -282,15 +287,6 @@ double parse_quantity(std::string_view text, Unit expected) {
                     matched = true;
                 }
                 if (matched) break;
-            }
-            // "2.2K" for 2.2 kΩ is common on resistor labels.
-            if (!matched && expected == Unit::ohm && rest.front() == 'K') {
-                const std::string_view after = rest.substr(1);
-                if (after.empty() || match_symbol(after) == Unit::ohm) {
-                    factor = 1e3;
-                    found = after.empty() ? std::nullopt : std::optional<Unit>(Unit::ohm);
-                    matched = true;
-                }
             }
             if (!matched) fail(expected, text);
         }
