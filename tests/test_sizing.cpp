@@ -1,0 +1,261 @@
+// Worst-case sizing (include/coilfit/sizing.hpp): hand-worked examples computed independently
+// here, the common-practice rules, and properties.
+#include <doctest/doctest.h>
+
+#include <cmath>
+
+#include "coilfit/sizing.hpp"
+
+using namespace coilfit;
+using doctest::Approx;
+
+namespace {
+
+constexpr double alpha = 0.00393;  // IEC 60028, annealed copper at 20 °C
+
+// A plain NPN with flat data, so the expected numbers are easy to work by hand.
+Bipolar flat_npn(double hfe = 100, double vce_sat = 0.2, double vbe_sat = 0.9) {
+    Bipolar b;
+    b.id = "TEST-NPN";
+    b.kind = BipolarKind::npn;
+    b.ic_max_a = 0.6;
+    b.vceo_v = 40;
+    b.hfe_min = {{0.001, hfe, std::nullopt}, {1.0, hfe, std::nullopt}};
+    b.vce_sat = {{0.001, 0.0001, vce_sat}, {1.0, 0.1, vce_sat}};
+    b.vbe_sat = {{0.001, 0.0001, vbe_sat}, {1.0, 0.1, vbe_sat}};
+    b.pd_w = 0.625;
+    b.rth_ja_k_per_w = 200;
+    b.tj_max_c = 150;
+    b.source = "test data";
+    return b;
+}
+
+Diode flat_diode() {
+    Diode d;
+    d.id = "TEST-D";
+    d.kind = DiodeKind::rectifier;
+    d.vrrm_v = 100;
+    d.if_avg_a = 1;
+    d.ifsm_a = 30;
+    d.vf = {{0.001, 1.0}, {1.0, 1.0}};
+    d.source = "test data";
+    return d;
+}
+
+// The irrigation-valve example worked by hand below.
+Spec hand_spec() {
+    Spec s;
+    s.name = "hand-worked";
+    s.supply = {12.0, 0.10};
+    s.ambient = {-20.0, 60.0};
+    s.coil.rated_voltage_v = 12.0;
+    s.coil.resistance_ohm = 400.0;
+    s.coil.tolerance = 0.10;
+    s.coil.reference_temp_c = 20.0;
+    s.coil.must_operate = 0.75;
+    s.coil.must_release = 0.10;
+    s.pin.vdd_v = 3.3;
+    s.pin.vdd_tolerance = 0.05;
+    s.pin.max_current_a = 0.008;
+    s.transistor = flat_npn();
+    s.clamp.type = ClampType::diode;
+    s.clamp.diode = flat_diode();
+    s.base_resistor.series = ESeries::e24;
+    s.base_resistor.tolerance = 0.05;
+    return s;
+}
+
+}  // namespace
+
+TEST_SUITE("sizing") {
+    TEST_CASE("coil current follows Ohm's law with the copper temperature at each corner") {
+        const Spec s = hand_spec();
+        const Sized z = size_numbers(s);
+        // Ohm's law; cold coil: 400 Ω -10 % at -20 °C (IEC 60028 copper, 40 K below 20 °C).
+        const double r_cold = 400.0 * 0.9 * (1.0 + alpha * (-20.0 - 20.0));
+        CHECK(z.worst.r_coil_cold_ohm == Approx(r_cold));
+        CHECK(z.worst.coil_current_max_a == Approx(13.2 / r_cold));  // highest supply 12 V +10 %
+        // Hot coil: 400 Ω +10 % at 60 °C.
+        const double r_hot = 400.0 * 1.1 * (1.0 + alpha * 40.0);
+        CHECK(z.worst.r_coil_hot_ohm == Approx(r_hot));
+        CHECK(z.worst.coil_current_nominal_a == Approx(12.0 / 400.0));
+        // Lowest coil voltage: 10.8 V less Vce(sat) 0.2 V; must-operate 75 % of 12 V, hot.
+        CHECK(z.worst.coil_voltage_min_v == Approx(10.6));
+        CHECK(z.worst.operate_voltage_hot_v == Approx(9.0 * (1.0 + alpha * 40.0)));
+        CHECK(z.worst.release_current_a == Approx(1.2 / 400.0));
+    }
+
+    TEST_CASE("the base resistor is the largest E24 value that saturates at worst case") {
+        const Spec s = hand_spec();
+        const Sized z = size_numbers(s);
+        const double r_cold = 400.0 * 0.9 * (1.0 + alpha * (-40.0));
+        const double i_max = 13.2 / r_cold;            // 0.04344 A
+        const double ib_req = i_max / 10.0;            // forced gain 10 (hFE 100 / 2 = 50 is looser)
+        const double rb_max = (3.3 * 0.95 - 0.9) / ib_req / 1.05;  // VDD low, Vbe(sat), Rb +5 %
+        CHECK(z.worst.base_resistor_max_ohm == Approx(rb_max));
+        // By hand: rb_max = 2.235 / 0.004344 / 1.05 = 490.0 Ω; the E24 value below is 470 Ω.
+        CHECK(rb_max == Approx(490.0).epsilon(0.002));
+        REQUIRE(z.rb_ohm.has_value());
+        CHECK(*z.rb_ohm == Approx(470.0));
+        // Pin current at the opposite corner: VDD high, Vbe low 0.6 V, Rb -5 %.
+        const double i_pin = (3.3 * 1.05 - 0.6) / (470.0 * 0.95);
+        CHECK(z.worst.pin_current_max_a == Approx(i_pin));
+        CHECK(z.worst.check(CheckId::pin_current).verdict == Verdict::pass);
+        // Lowest base current and the worst forced gain with 470 Ω.
+        const double ib_min = (3.3 * 0.95 - 0.9) / (470.0 * 1.05);
+        CHECK(z.worst.base_current_min_a == Approx(ib_min));
+        CHECK(z.worst.forced_gain_worst == Approx(i_max / ib_min));
+        CHECK(z.worst.check(CheckId::transistor_saturation).verdict == Verdict::pass);
+        // Smallest resistor the pin can carry: (3.465 - 0.6) / (8 mA * 0.95).
+        CHECK(z.worst.base_resistor_min_ohm == Approx((3.465 - 0.6) / (0.008 * 0.95)));
+    }
+
+    TEST_CASE("the pin's output resistance and the pull-down enter the largest resistor") {
+        Spec s = hand_spec();
+        s.pin.voh_v = 2.9;
+        s.pin.voh_current_a = 0.008;
+        s.pulldown_ohm = 47e3;
+        const Sized z = size_numbers(s);
+        const double i_max = 13.2 / (360.0 * (1.0 - alpha * 40.0));
+        const double r_out = (3.3 - 2.9) / 0.008;  // Thevenin: (VDD - VOH) / IOH = 50 Ω
+        const double rb_max = ((3.135 - 0.9) / (i_max / 10.0 + 0.9 / 47e3) - r_out) / 1.05;
+        CHECK(z.worst.pin_r_out_ohm == Approx(50.0));
+        CHECK(z.worst.base_resistor_max_ohm == Approx(rb_max));
+        CHECK(z.worst.base_current_min_a == Approx((3.135 - 0.9) / (*z.rb_ohm * 1.05 + r_out) - 0.9 / 47e3));
+    }
+
+    TEST_CASE("with overdrive 5 the minimum gain a pin can serve is 5 I_coil / I_pin") {
+        // Common practice, no single source: drive the base with five times the current the
+        // minimum gain needs.
+        Spec s = hand_spec();
+        s.policy.overdrive = 5;
+        const Sized z = size_numbers(s);
+        CHECK(z.worst.hfe_needed == Approx(5.0 * z.worst.coil_current_max_a / 0.008));
+    }
+
+    TEST_CASE("with the pin at the supply and Vbe neglected the base resistor is hFE R_coil / 5") {
+        // Common practice, no single source: Rb = hFE * R_coil / 5 when the drive voltage equals
+        // the coil supply, Vbe is neglected and the base gets five times the minimum current.
+        Spec s = hand_spec();
+        s.supply = {5.0, 0.0};
+        s.ambient = {20.0, 20.0};
+        s.coil.tolerance = 0.0;
+        s.coil.rated_voltage_v = 5.0;
+        s.coil.resistance_ohm = 70.0;
+        s.pin.vdd_v = 5.0;
+        s.pin.vdd_tolerance = 0.0;
+        s.pin.max_current_a = 0.025;
+        s.base_resistor.tolerance = 0.0;
+        s.policy.overdrive = 5;
+        s.policy.forced_gain = 1e4;  // let the overdrive rule bind
+        s.transistor = flat_npn(100, 1e-9, 1e-9);
+        const Sized z = size_numbers(s);
+        CHECK(z.worst.base_resistor_max_ohm == Approx(100.0 * 70.0 / 5.0).epsilon(1e-6));
+        CHECK(*z.rb_ohm == Approx(1300.0));  // E24 value below 1400 Ω
+    }
+
+    TEST_CASE("a fixed base resistor is checked, not chosen") {
+        Spec s = hand_spec();
+        s.base_resistor.value_ohm = 1000.0;
+        const Sized z = size_numbers(s);
+        CHECK(*z.rb_ohm == Approx(1000.0));
+        CHECK(z.worst.check(CheckId::transistor_saturation).verdict == Verdict::fail);
+        const SizingReport r = size(s, Catalogue{});
+        CHECK(r.resistor.fixed);
+        CHECK(r.verdict == Verdict::fail);
+    }
+
+    TEST_CASE("a pin that cannot drive the transistor fails and says what gain would do") {
+        Spec s = hand_spec();
+        s.pin.max_current_a = 0.002;
+        s.transistor = flat_npn(30);
+        const SizingReport r = size(s, Catalogue{});
+        CHECK(r.verdict == Verdict::fail);
+        const Check* pin = r.find_check("pin.current");
+        REQUIRE(pin != nullptr);
+        CHECK(pin->verdict == Verdict::fail);
+        CHECK(pin->message.find("hFE min of at least") != std::string::npos);
+        const double hfe_needed = 2.0 * r.quantity("coil_current_max_a").value() / 0.002;
+        CHECK(r.quantity("hfe_needed").value() == Approx(hfe_needed));
+    }
+
+    TEST_CASE("a coil that cannot operate at the lowest supply is a failed check, not an error") {
+        Spec s = hand_spec();
+        s.supply = {9.0, 0.10};  // 8.1 V low against 9 V * 1.157 hot must-operate
+        const SizingReport r = size(s, Catalogue{});
+        const Check* op = r.find_check("coil.operate");
+        REQUIRE(op != nullptr);
+        CHECK(op->verdict == Verdict::fail);
+        CHECK(op->margin.value() < 0);
+        CHECK(op->message.find("may not pull in") != std::string::npos);
+    }
+
+    TEST_CASE("no clamp always fails the transistor's voltage check") {
+        Spec s = hand_spec();
+        s.clamp.type = ClampType::none;
+        s.clamp.diode.reset();
+        const SizingReport r = size(s, Catalogue{});
+        const Check* v = r.find_check("transistor.voltage");
+        REQUIRE(v != nullptr);
+        CHECK(v->verdict == Verdict::fail);
+        CHECK_FALSE(v->value.has_value());
+        CHECK(v->message.find("limited only by breakdown") != std::string::npos);
+        CHECK(r.verdict == Verdict::fail);
+    }
+
+    TEST_CASE("a pin below Vbe gives no resistor and failed checks, no NaN") {
+        Spec s = hand_spec();
+        s.pin.vdd_v = 0.8;
+        const SizingReport r = size(s, Catalogue{});
+        CHECK_FALSE(r.resistor.value_ohm.has_value());
+        CHECK(r.find_check("transistor.saturation")->verdict == Verdict::fail);
+        CHECK(r.find_check("pin.current")->verdict == Verdict::fail);
+        for (const auto& q : r.quantities) CHECK(std::isfinite(q.value));
+    }
+
+    TEST_CASE("the diode clamp peak is the supply plus one diode drop") {
+        // Common practice: a plain diode holds the collector about one drop above the supply.
+        const Sized z = size_numbers(hand_spec());
+        CHECK(z.worst.peak_collector_voltage_v == Approx(13.2 + 1.0));
+        CHECK(z.worst.check(CheckId::transistor_voltage).limit == Approx(0.75 * 40.0));
+    }
+
+    TEST_CASE("properties: more supply never means less coil current; the resistor is the series' best") {
+        for (double vs = 3.0; vs <= 48.0; vs *= 1.21) {
+            for (const ESeries series : {ESeries::e6, ESeries::e12, ESeries::e24, ESeries::e96}) {
+                Spec s = hand_spec();
+                s.base_resistor.series = series;
+                s.base_resistor.tolerance = eseries_tolerance(series);
+                s.supply.voltage_v = vs;
+                Spec higher = s;
+                higher.supply.voltage_v = vs * 1.01;
+                const Sized a = size_numbers(s);
+                const Sized b = size_numbers(higher);
+                CAPTURE(vs);
+                CHECK(b.worst.coil_current_max_a >= a.worst.coil_current_max_a);
+                CHECK(b.worst.coil_current_min_a >= a.worst.coil_current_min_a);
+                if (a.rb_ohm) {
+                    CHECK(eseries_contains(*a.rb_ohm, series));
+                    CHECK(*a.rb_ohm <= a.worst.base_resistor_max_ohm);
+                    const auto up = eseries_next_up(*a.rb_ohm, series);
+                    if (up) CHECK(*up > a.worst.base_resistor_max_ohm);
+                    // The chosen value saturates the transistor at worst case.
+                    CHECK(a.worst.forced_gain_worst <= a.worst.beta_target * (1 + 1e-12));
+                }
+            }
+        }
+    }
+
+    TEST_CASE("the report lists the defaults-independent notes and the cautions") {
+        Spec s = hand_spec();
+        s.load = LoadSpec{230.0, LoadKind::ac, 2.0};
+        const SizingReport r = size(s, Catalogue{});
+        bool mains = false;
+        for (const auto& c : r.cautions) mains = mains || c.find("local electrical codes and licensed practice") != std::string::npos;
+        CHECK(mains);
+        CHECK(r.cautions.front().find("worst-case estimates") != std::string::npos);
+        bool pulldown = false;
+        for (const auto& n : r.notes) pulldown = pulldown || n.find("pull-down") != std::string::npos;
+        CHECK(pulldown);
+    }
+}
