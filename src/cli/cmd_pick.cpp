@@ -51,7 +51,7 @@ int run_pick(const PickOptions& options) {
             const Candidate& c = result.candidates[i];
             rows.push_back({std::to_string(i + 1), c.transistor, c.diode.empty() ? "-" : c.diode,
                             c.base_resistor_ohm ? format_quantity(*c.base_resistor_ohm, Unit::ohm) : "none",
-                            c.worst_check, fmt::format("{:+.0f} %", c.worst_margin * 100.0),
+                            c.worst_check, c.worst_margin < -9.99 ? std::string("<-999 %") : fmt::format("{:+.0f} %", c.worst_margin * 100.0),
                             c.verdict == Verdict::pass ? "pass" : "FAIL"});
         }
         std::array<std::size_t, 7> w{};
@@ -74,7 +74,7 @@ int run_pick(const PickOptions& options) {
         if (n < result.candidates.size()) text += fmt::format("  ... {} more (--top 0 lists all)\n", result.candidates.size() - n);
         if (!result.reasons.empty()) {
             text += "\nNothing passes:\n";
-            for (const auto& r : result.reasons) text += "  - " + io::wrap(r, text_width() - 4, 4) + "\n";
+            for (const auto& r : result.reasons) text += "  - " + io::wrap(r, text_width(), 4) + "\n";
         }
         text += "\nRanked by the smallest margin over all checks; size one with `coilfit size SPEC --transistor ID --diode ID`.\n"
                 "Values are typical datasheet limits from memory; confirm against the datasheets in use.\n";

@@ -12,6 +12,12 @@ namespace {
 std::string reason_for(std::string_view check, const Evaluation& e, const Spec& spec) {
     const std::string at = " at " + format_quantity(e.coil_current_max_a, Unit::ampere);
     if (check == "pin.current" || check == "transistor.saturation") {
+        if (e.forced_gain_policy * spec.policy.overdrive <= e.hfe) {
+            return "the pin can't supply the base current that forced gain " +
+                   format_quantity(e.forced_gain_policy, Unit::number) + " asks for (" +
+                   format_quantity(e.base_current_required_a, Unit::ampere) +
+                   "); a Darlington would, or a pin or buffer that can source it";
+        }
         return "the pin can't supply the base current; a Darlington or a part with hFE min of at least " +
                format_quantity(e.hfe_needed, Unit::number) + at + " would";
     }

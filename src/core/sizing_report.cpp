@@ -46,7 +46,9 @@ std::string check_message(CheckId id, const Spec& spec, const Evaluation& e, con
     case CheckId::transistor_voltage:
         if (!e.clamp.limited) {
             return "no clamp: at turn-off the collector voltage is limited only by breakdown, and the "
-                   "stored energy 1/2 L I^2 goes into the transistor; fit a diode across the coil";
+                   "stored energy 1/2 L I^2" +
+                   (spec.coil.inductance_h ? " (" + q(e.stored_energy_j, Unit::joule) + ")" : std::string()) +
+                   " goes into the transistor; fit a diode across the coil";
         }
         return "the collector flies to " + q(e.peak_collector_voltage_v, Unit::volt) +
                " at turn-off against " + q(c.limit, Unit::volt) + " (" + q(p.voltage_derating, Unit::ratio) +
@@ -95,11 +97,17 @@ std::string check_message(CheckId id, const Spec& spec, const Evaluation& e, con
                         q(c.limit, Unit::ampere);
         if (!ok) {
             m += ": the base resistor must be at least " + q(e.base_resistor_min_ohm, Unit::ohm) +
-                 " for the pin but at most " + q(e.base_resistor_max_ohm, Unit::ohm) +
-                 " to saturate the transistor; use a transistor with hFE min of at least " +
-                 format_quantity(e.hfe_needed, Unit::number) + " at " + q(e.coil_current_max_a, Unit::ampere) +
-                 " (a Darlington, say), or a pin or buffer that can source " +
-                 q(e.pin_current_max_a, Unit::ampere);
+                 " for the pin but at most " + q(e.base_resistor_max_ohm, Unit::ohm) + " to saturate the transistor";
+            if (e.forced_gain_policy * p.overdrive <= e.hfe) {
+                // The forced-gain policy, not the part's gain, sets the base current.
+                m += "; the forced gain " + format_quantity(e.forced_gain_policy, Unit::number) +
+                     " sets the base current, so more hFE does not help: use a Darlington, a pin or buffer that can source " +
+                     q(e.pin_current_max_a, Unit::ampere) + ", or a looser policy.forced_gain (Vce(sat) is then not guaranteed)";
+            } else {
+                m += "; use a transistor with hFE min of at least " + format_quantity(e.hfe_needed, Unit::number) +
+                     " at " + q(e.coil_current_max_a, Unit::ampere) + " (a Darlington, say), or a pin or buffer that can source " +
+                     q(e.pin_current_max_a, Unit::ampere);
+            }
         }
         return m;
     }
@@ -140,10 +148,14 @@ std::string skip_message(CheckId id, const Spec& spec) {
     case CheckId::diode_voltage:
     case CheckId::diode_current: return "not checked: there is no clamp diode";
     case CheckId::clamp_power:
+        if (spec.clamp.type == ClampType::none) return "not checked: there is no clamp";
         if (!spec.coil.inductance_h) return "not checked: give coil.inductance to estimate the clamp energy";
         return "not checked: give switching.frequency to estimate the clamp's average power";
     case CheckId::release_time:
         if (!spec.coil.max_release_time_s) return "not checked: give coil.max_release_time to check it";
+        if (spec.clamp.type == ClampType::none) {
+            return "not checked: without a clamp the turn-off is set by the transistor's breakdown; fit a clamp";
+        }
         return "not checked: give coil.inductance to estimate the release time";
     default: return "not checked";
     }
@@ -294,7 +306,7 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
     add(qs, "operate_voltage_hot_v", e.operate_voltage_hot_v, Unit::volt, "must-operate voltage, hot coil");
     add(qs, "release_current_a", e.release_current_a, Unit::ampere, "release current (must-release)");
     add(qs, "hfe_min", e.hfe_min, Unit::number, "hFE min at the highest coil current");
-    add(qs, "hfe_needed", e.hfe_needed, Unit::number, "hFE min this pin can serve (overdrive x I / I pin)");
+    add(qs, "hfe_needed", e.hfe_needed, Unit::number, "hFE min needed on this pin (overdrive x I / I pin)");
     add(qs, "forced_gain_target", e.beta_target, Unit::number, "forced gain target");
     add(qs, "base_current_required_a", e.base_current_required_a, Unit::ampere, "base current required");
     add(qs, "vce_sat_v", e.vce_sat_v, Unit::volt, "Vce(sat) max at the highest coil current");
@@ -319,7 +331,9 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
     if (e.has_timing) {
         add(qs, "release_time_s", e.release_time_s, Unit::second, "release time, longest");
         add(qs, "current_zero_time_s", e.current_zero_time_s, Unit::second, "time until the coil current is zero");
-        add(qs, "stored_energy_j", e.stored_energy_j, Unit::joule, "stored energy 1/2 L I^2");
+    }
+    if (spec.coil.inductance_h) add(qs, "stored_energy_j", e.stored_energy_j, Unit::joule, "stored energy 1/2 L I^2");
+    if (e.has_timing) {
         add(qs, "clamp_energy_j", e.clamp_energy_j, Unit::joule, "clamp energy per turn-off");
         add(qs, "clamp_charge_coulomb", e.clamp_charge_c, Unit::coulomb, "charge through the clamp");
     }

@@ -30,19 +30,22 @@ std::string wrap(std::string_view text, std::size_t width, std::size_t indent) {
     std::istringstream words{std::string(text)};
     std::string word;
     std::string out;
-    std::size_t col = 0;
+    // The caller has printed `indent` columns before the text; every line ends by `width`.
+    std::size_t col = indent;
+    bool line_empty = true;
     while (words >> word) {
         const std::size_t w = display_width(word);
-        if (col > 0 && col + 1 + w > width) {
+        if (!line_empty && col + 1 + w > width) {
             out += '\n';
             out.append(indent, ' ');
             col = indent;
-        } else if (col > 0) {
+        } else if (!line_empty) {
             out += ' ';
             ++col;
         }
         out += word;
         col += w;
+        line_empty = false;
     }
     return out;
 }

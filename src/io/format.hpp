@@ -34,7 +34,8 @@ namespace coilfit::io {
 // Pads s with spaces on the right (or left) to a display width.
 [[nodiscard]] std::string pad_right(std::string_view s, std::size_t width);
 [[nodiscard]] std::string pad_left(std::string_view s, std::size_t width);
-// Word-wraps text to width columns, every line after the first indented by indent spaces.
+// Word-wraps text that starts at column `indent` (the caller printed the prefix) so that no line
+// passes `width` columns; continuation lines are indented by `indent` spaces.
 [[nodiscard]] std::string wrap(std::string_view text, std::size_t width, std::size_t indent);
 
 }  // namespace coilfit::io

@@ -10,6 +10,7 @@ std::string qf(double v, Unit u) { return format_quantity(v, u); }
 
 std::string margin_text(const std::optional<double>& m) {
     if (!m) return "";
+    if (*m < -9.99) return "<-999 %";
     return fmt::format("{:+.0f} %", *m * 100.0);
 }
 
@@ -42,7 +43,7 @@ std::string paint(std::string_view text, Verdict verdict, const TextStyle& style
 std::string render_text(const SizingReport& report, const Spec& spec, const TextStyle& style) {
     std::string out;
     const auto line = [&](std::string_view label, const std::string& text) {
-        out += "  " + pad_right(label, 15) + wrap(text, style.width - 17, 17) + "\n";
+        out += "  " + pad_right(label, 15) + wrap(text, style.width, 17) + "\n";
     };
 
     out += fmt::format("coilfit {} - {}\n\n", COILFIT_VERSION, spec.name.empty() ? std::string("unnamed channel") : spec.name);
@@ -134,7 +135,7 @@ std::string render_text(const SizingReport& report, const Spec& spec, const Text
         if (c.verdict == Verdict::skip) continue;
         if (!any_detail) out += heading("What the checks found");
         any_detail = true;
-        out += "  " + paint(pad_right(c.id, id_w), c.verdict, style) + "  " + wrap(c.message, style.width - id_w - 4, id_w + 4) + "\n";
+        out += "  " + paint(pad_right(c.id, id_w), c.verdict, style) + "  " + wrap(c.message, style.width, id_w + 4) + "\n";
     }
     if (any_detail) out += "\n";
 
@@ -163,11 +164,11 @@ std::string render_text(const SizingReport& report, const Spec& spec, const Text
 
     if (!report.notes.empty()) {
         out += heading("Notes");
-        for (const auto& n : report.notes) out += "  - " + wrap(n, style.width - 4, 4) + "\n";
+        for (const auto& n : report.notes) out += "  - " + wrap(n, style.width, 4) + "\n";
         out += "\n";
     }
     out += heading("Cautions");
-    for (const auto& c : report.cautions) out += "  ! " + wrap(c, style.width - 4, 4) + "\n";
+    for (const auto& c : report.cautions) out += "  ! " + wrap(c, style.width, 4) + "\n";
     out += "\n";
 
     std::size_t fails = 0;
