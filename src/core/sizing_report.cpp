@@ -397,7 +397,8 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
 
     // --- cautions ---
     r.cautions.push_back("figures are worst-case estimates from datasheet limits; the shipped parts table holds values "
-                         "from memory: confirm every part against the datasheet in use and the design on the bench");
+                         "from memory: confirm every part against the datasheet in use and the design on the bench; "
+                         "wiring to mains follows local electrical codes and licensed practice");
     const std::string contact_rules =
         "keep creepage and clearance between the coil circuit and the contacts, fuse the load, enclose live parts, "
         "and follow local electrical codes and licensed practice";
