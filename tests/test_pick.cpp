@@ -1,0 +1,95 @@
+// pick (include/coilfit/pick.hpp): every candidate agrees with sizing it alone; stable ranking.
+#include <doctest/doctest.h>
+
+#include <algorithm>
+
+#include "coilfit/pick.hpp"
+#include "coilfit/sizing.hpp"
+#include "io/spec_io.hpp"
+
+using namespace coilfit;
+namespace io = coilfit::io;
+
+namespace {
+
+struct Setup {
+    io::PartsTable table;
+    Spec spec;
+};
+
+Setup load(const std::string& example) {
+    Setup s;
+    s.table = io::load_parts(COILFIT_TEST_PARTS_DIR);
+    s.spec = io::read_spec(io::load_spec_document(std::string(COILFIT_TEST_EXAMPLES_DIR) + "/" + example), s.table);
+    return s;
+}
+
+}  // namespace
+
+TEST_SUITE("pick") {
+    TEST_CASE("every candidate pick reports agrees with sizing that combination alone") {
+        for (const char* example : {"greenhouse-valve.json", "garage-door.json", "dust-extractor.json"}) {
+            CAPTURE(example);
+            const Setup s = load(example);
+            const PickResult result = pick(s.spec, s.table.catalogue);
+            CHECK(result.candidates.size() == s.table.catalogue.bipolars.size() * s.table.catalogue.diodes.size());
+            for (const Candidate& c : result.candidates) {
+                CAPTURE(c.transistor);
+                CAPTURE(c.diode);
+                Spec alone = s.spec;
+                alone.transistor = *s.table.catalogue.find_bipolar(c.transistor);
+                alone.clamp.diode = *s.table.catalogue.find_diode(c.diode);
+                const SizingReport r = size(alone, s.table.catalogue);
+                CHECK(r.verdict == c.verdict);
+                CHECK(r.resistor.value_ohm == c.base_resistor_ohm);
+                std::vector<std::string> failed;
+                for (const auto& ch : r.checks) {
+                    if (ch.verdict == Verdict::fail) failed.push_back(ch.id);
+                }
+                CHECK(failed == c.failed);
+                const Check* worst = r.worst_check();
+                REQUIRE(worst != nullptr);
+                CHECK(worst->id == c.worst_check);
+            }
+        }
+    }
+
+    TEST_CASE("passing combinations come first, ranked by their smallest margin") {
+        const Setup s = load("greenhouse-valve.json");
+        const PickResult result = pick(s.spec, s.table.catalogue);
+        REQUIRE_FALSE(result.candidates.empty());
+        CHECK(result.candidates.front().verdict == Verdict::pass);
+        CHECK(result.reasons.empty());
+        for (std::size_t i = 1; i < result.candidates.size(); ++i) {
+            const Candidate& a = result.candidates[i - 1];
+            const Candidate& b = result.candidates[i];
+            if (a.verdict == b.verdict) {
+                CHECK(a.worst_margin >= b.worst_margin);
+                if (a.worst_margin == b.worst_margin) CHECK(a.pin_current_max_a <= b.pin_current_max_a);
+            } else {
+                CHECK(a.verdict == Verdict::pass);
+            }
+        }
+    }
+
+    TEST_CASE("the ranking is deterministic") {
+        const Setup s = load("dust-extractor.json");
+        const PickResult a = pick(s.spec, s.table.catalogue);
+        const PickResult b = pick(s.spec, s.table.catalogue);
+        REQUIRE(a.candidates.size() == b.candidates.size());
+        for (std::size_t i = 0; i < a.candidates.size(); ++i) {
+            CHECK(a.candidates[i].transistor == b.candidates[i].transistor);
+            CHECK(a.candidates[i].diode == b.candidates[i].diode);
+        }
+    }
+
+    TEST_CASE("when nothing passes, each family gets one line saying why") {
+        Setup s = load("garage-door.json");
+        s.spec.pin.max_current_a = 0.0005;  // a 0.5 mA pin: nothing can be driven
+        const PickResult result = pick(s.spec, s.table.catalogue);
+        CHECK(std::none_of(result.candidates.begin(), result.candidates.end(),
+                           [](const Candidate& c) { return c.verdict == Verdict::pass; }));
+        REQUIRE_FALSE(result.reasons.empty());
+        for (const auto& r : result.reasons) CHECK(r.rfind("every ", 0) == 0);
+    }
+}
