@@ -31,9 +31,12 @@ std::string reason_for(std::string_view check, const Evaluation& e, const Spec& 
                                : "without a clamp no transistor survives turn-off";
     }
     if (check == "transistor.thermal") return "the junction runs too hot at the highest ambient";
-    if (check == "coil.operate" || check == "coil.overvoltage") {
-        return "the coil itself fails " + std::string(check) + " whatever the transistor (supply against coil rating)";
+    if (check == "coil.operate") {
+        return "the coil gets only " + format_quantity(e.coil_voltage_min_v, Unit::volt) +
+               " (lowest supply less their Vce(sat) of " + format_quantity(e.vce_sat_v, Unit::volt) + ") but needs " +
+               format_quantity(e.operate_voltage_hot_v, Unit::volt) + " to operate when hot";
     }
+    if (check == "coil.overvoltage") return "the coil's maximum voltage is exceeded whatever the transistor";
     if (check == "resistor.power") return "the base resistor's power rating is too low for the base current they need";
     if (check.rfind("diode.", 0) == 0 || check == "clamp.power") return "no diode of the table passes " + std::string(check);
     if (check == "release.time") return "the release is too slow with this clamp type; try diode_zener";
