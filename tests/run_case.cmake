@@ -1,7 +1,8 @@
 # Runs one command and checks its exit code and output; used by the end-to-end ctest cases.
-#   cmake -DCMD="prog;arg;..." -DRC=1 [-DSTDOUT_MATCH=regex] [-DSTDERR_MATCH=regex]
+#   cmake -DCMD="prog;arg;..." (or prog|arg|...) -DRC=1 [-DSTDOUT_MATCH=regex] [-DSTDERR_MATCH=regex]
 #         [-DSTDERR_EXACT=line] [-DSTDOUT_NOT_MATCH=regex] [-DINPUT=file] [-DWORKDIR=dir]
 #         -P run_case.cmake
+string(REPLACE "|" ";" CMD "${CMD}")
 if(NOT DEFINED RC)
   set(RC 0)
 endif()

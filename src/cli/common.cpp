@@ -72,7 +72,9 @@ void add_spec_options(CLI::App& app, SpecOptions& options) {
     options.storage.resize(spec_flag_count);
     for (std::size_t i = 0; i < spec_flag_count; ++i) {
         const SpecFlag& f = spec_flags[i];
-        auto* opt = app.add_option(f.flag, options.storage[i], f.help)->group("Spec fields (override the file)");
+        auto* opt = app.add_option(f.flag, options.storage[i], f.help)
+                        ->group("Spec fields (override the file)")
+                        ->multi_option_policy(CLI::MultiOptionPolicy::TakeLast);
         const std::string path = f.path;
         const std::string flag = f.flag;
         opt->each([&options, path, flag](const std::string& value) {
@@ -91,7 +93,7 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
 io::SpecDocument build_spec_document(const SpecOptions& options) {
     io::SpecDocument d = options.spec_path.empty() ? io::flags_only_document() : io::load_spec_document(options.spec_path);
     if (options.spec_path.empty() && options.values.empty()) {
-        throw InputError("no spec: give a spec file (or - for standard input), or the spec fields as flags; see --help");
+        throw InputError("no spec: give a spec file (or - for standard input), or the spec fields as flags (see --help)");
     }
     for (std::size_t i = 0; i < options.values.size(); ++i) {
         io::set_field(d, options.values[i].first, options.values[i].second, options.flag_of[i].second);
