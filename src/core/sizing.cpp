@@ -223,10 +223,11 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
         set(CheckId::transistor_voltage, failed_without_value(derated_vceo));
     }
 
+    // Stored energy 1/2 L I0^2; without a clamp all of it goes into the transistor at turn-off.
+    if (coil.inductance_h) e.stored_energy_j = stored_energy(*coil.inductance_h, i0);
     if (coil.inductance_h && e.clamp.limited) {
         const double l = *coil.inductance_h;
         e.has_timing = true;
-        e.stored_energy_j = stored_energy(l, i0);
         // Timing corner: cold coil (longest tau, highest I0) and the lowest clamp voltage.
         const double r_loop = e.r_coil_cold_ohm + e.clamp.series_ohm;
         const Decay slow = rl_decay(l, r_loop, e.clamp.timing_v, i0, e.release_current_a);
