@@ -2,6 +2,7 @@
 
 #include "cli/commands.hpp"
 #include "coilfit/sizing.hpp"
+#include "io/netlist.hpp"
 #include "io/report_io.hpp"
 
 namespace coilfit::cli {
@@ -19,6 +20,10 @@ int run_size(const SizeOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
     const SizingReport report = size(spec, table.catalogue);
+    if (!options.netlist.empty()) {
+        // Built before anything is written, so a design that cannot be simulated writes nothing.
+        emit(io::spice_netlist(spec, size_numbers(spec)), options.netlist);
+    }
     std::string text;
     if (options.common.format == "json") {
         text = io::report_to_json(report, spec).dump(2) + "\n";

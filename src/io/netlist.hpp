@@ -1,0 +1,27 @@
+// A SPICE netlist of the sized circuit, for checking the report in a simulator:
+// `coilfit size SPEC --netlist FILE`, then `ngspice -b FILE`.
+//
+// The netlist holds the driver at the corner that gives the longest release (highest supply,
+// cold coil at its low resistance tolerance, the chosen base resistor at its weakest drive),
+// with generic device models written here from the parts table data (never vendor models), a
+// transient run (pin high, coil current settles, pin low) and three `.meas` statements named as
+// the report's figures: coil_current_on, peak_collector and release_time.
+#pragma once
+
+#include <string>
+
+#include "coilfit/sizing.hpp"
+#include "coilfit/spec.hpp"
+
+namespace coilfit::io {
+
+// Names of the measurements, as ngspice prints them.
+inline constexpr std::string_view meas_coil_current = "coil_current_on";
+inline constexpr std::string_view meas_peak_collector = "peak_collector";
+inline constexpr std::string_view meas_release_time = "release_time";
+
+// The netlist text for the sized design. Throws InputError when the design cannot be simulated
+// meaningfully: no coil inductance, no clamp, or no base resistor.
+[[nodiscard]] std::string spice_netlist(const Spec& spec, const Sized& sized);
+
+}  // namespace coilfit::io
