@@ -177,12 +177,12 @@ std::string spice_netlist(const Spec& spec, const Sized& sized) {
     comment("Models are generic, written by coilfit from the parts table data; they are NOT vendor models.");
     comment(fmt::format("  NPN: Gummel-Poon, BF = {} (the part's minimum hFE at {} A), IS = {} A, BR = {}, RC = {} ohm.", num(bf),
                         num(i0), num(npn_is_a), num(npn_br), num(rc)));
-    comment(fmt::format("    Vce(sat) of the model at this drive is about {} V; the data's maximum is {} V.", num(vce_model),
-                        num(e.vce_sat_v)));
+    comment(fmt::format("    Vce(sat) of the model at this drive is about {:.3g} V ({:.2g} % of the supply); the data's maximum is {} V.",
+                        vce_model, 100.0 * vce_model / c.vs_hi_v, num(e.vce_sat_v)));
     comment("    The report's highest coil current neglects Vce(sat) (it only lowers the current), so the model keeps");
-    comment("    it to tens of mV (generous BR, RC giving 5 % of the data's maximum) and the simulated current checks");
-    comment(fmt::format("    that figure. For the current at the data's maximum Vce(sat) set RC to about {} ohm.",
-                        num(e.vce_sat_v / i0)));
+    comment("    it low on purpose (a generous BR, and RC giving 5 % of the data's maximum) and the simulated current");
+    comment(fmt::format("    checks that figure. For the current at the data's maximum Vce(sat) set RC to about {:.3g} ohm.",
+                        e.vce_sat_v / i0));
     if (tr.kind == BipolarKind::darlington) {
         comment("    The Darlington is modelled as one NPN with the pair's gain; its higher Vce(sat) and Vbe are not.");
     }
