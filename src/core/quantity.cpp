@@ -82,28 +82,50 @@ std::string_view trim(std::string_view s) {
 
 bool is_digit(char c) { return c >= '0' && c <= '9'; }
 
-// Shows the offending text in a message: printable ASCII and UTF-8 as they are, other bytes
-// escaped, long texts cut, so that binary garbage never reaches a terminal raw.
+// Length of the well-formed UTF-8 sequence at s[i], 0 when the bytes there are not one.
+std::size_t utf8_length(std::string_view s, std::size_t i) {
+    const auto b = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
+    const unsigned char c = b(i);
+    if (c < 0x80) return 1;
+    const std::size_t n = c >= 0xC2 && c <= 0xDF ? 2 : c >= 0xE0 && c <= 0xEF ? 3 : c >= 0xF0 && c <= 0xF4 ? 4 : 0;
+    if (n == 0 || i + n > s.size()) return 0;
+    const unsigned char lo = c == 0xE0 ? 0xA0 : c == 0xF0 ? 0x90 : 0x80;
+    const unsigned char hi = c == 0xED ? 0x9F : c == 0xF4 ? 0x8F : 0xBF;
+    if (b(i + 1) < lo || b(i + 1) > hi) return 0;
+    for (std::size_t k = 2; k < n; ++k) {
+        if (b(i + k) < 0x80 || b(i + k) > 0xBF) return 0;
+    }
+    return n;
+}
+
+// Shows the offending text in a message: printable ASCII and UTF-8 as they are, control
+// characters and bytes that are not UTF-8 escaped, long texts cut (never inside a character),
+// so that binary garbage never reaches a terminal raw.
 std::string quoted(std::string_view text) {
     std::string out = "\"";
     std::size_t shown = 0;
-    for (const char c : text) {
+    for (std::size_t i = 0; i < text.size();) {
         if (++shown > 40) {
             out += "...";
             break;
         }
+        const char c = text[i];
         const auto u = static_cast<unsigned char>(c);
+        const std::size_t n = utf8_length(text, i);
         if (c == '"' || c == '\\') {
             out += '\\';
             out += c;
-        } else if (u < 0x20 || u == 0x7f) {
+        } else if (n == 0 || u < 0x20 || u == 0x7f || (u == 0xC2 && static_cast<unsigned char>(text[i + 1]) < 0xA0)) {
             constexpr std::string_view hex = "0123456789abcdef";
             out += "\\x";
             out += hex[u >> 4U];
             out += hex[u & 0xfU];
+            i += 1;
+            continue;
         } else {
-            out += c;
+            out.append(text.substr(i, n));
         }
+        i += n;
     }
     out += '"';
     return out;
@@ -160,8 +182,9 @@ std::string plain_number(double v, int significant) {
     char buf[64];
     std::snprintf(buf, sizeof buf, "%.*g", significant, v);
     std::string s(buf);
-    if (s.find('e') != std::string::npos) {
-        // %g chose exponent form (e.g. 1e+03): print fixed instead.
+    if (s.find('e') != std::string::npos && std::abs(v) >= 1 && std::abs(v) < 1e15) {
+        // %g chose exponent form (e.g. 1e+03): print fixed instead (far outside the
+        // prefixes, keep the exponent).
         std::snprintf(buf, sizeof buf, "%.0f", v);
         s = buf;
     }
@@ -174,9 +197,13 @@ std::string format_quantity(double value, Unit unit, int significant) {
     if (!std::isfinite(value)) return "n/a";
     significant = std::clamp(significant, 1, 12);
     switch (unit) {
-    case Unit::ratio: return plain_number(value * 100.0, significant) + " %";
+    case Unit::ratio:
+        // 100 x a value near the largest double overflows: print the fraction then.
+        if (!std::isfinite(value * 100.0)) return plain_number(value, significant);
+        return plain_number(value * 100.0, significant) + " %";
     case Unit::number: return plain_number(value, significant);
     case Unit::celsius: {
+        if (std::abs(value) >= 1e15) return plain_number(value, significant) + " °C";
         char buf[64];
         std::snprintf(buf, sizeof buf, "%.1f", value);
         return std::string(buf) + " °C";
@@ -188,8 +215,8 @@ std::string format_quantity(double value, Unit unit, int significant) {
     static constexpr std::array<std::pair<double, std::string_view>, 8> steps{{
         {1e9, "G"}, {1e6, "M"}, {1e3, "k"}, {1.0, ""}, {1e-3, "m"}, {1e-6, "µ"}, {1e-9, "n"}, {1e-12, "p"}}};
     const double mag = std::abs(value);
-    std::size_t pick = 3;  // no prefix for zero
-    if (mag > 0) {
+    std::size_t pick = 3;  // no prefix for zero, nor far outside the prefixes (1e+20 V)
+    if (mag > 0 && mag < 1e15 && mag >= 1e-15) {
         pick = steps.size() - 1;
         for (std::size_t i = 0; i < steps.size(); ++i) {
             // Round first, so that 999.96 becomes 1 k rather than 1000.
@@ -300,7 +327,7 @@ double parse_quantity(std::string_view text, Unit expected) {
     }
     const double result = value * factor;
     if (!std::isfinite(result)) fail(expected, text, "out of range");
-    return result;
+    return result == 0 ? 0.0 : result;  // "-0" reads as 0
 }
 
 }  // namespace coilfit

@@ -1,5 +1,6 @@
 #include "io/json_read.hpp"
 
+#include <array>
 #include <cmath>
 #include <cstdio>
 #include <fstream>
@@ -44,16 +45,136 @@ void check_depth(std::string_view text, const std::string& file) {
     }
 }
 
-std::string shorten(std::string s, std::size_t n) {
-    if (s.size() > n) s = s.substr(0, n) + "...";
-    for (auto& c : s) {
-        const auto u = static_cast<unsigned char>(c);
-        if (u < 0x20 || u == 0x7f || u >= 0x80) c = '?';
+// Length of the well-formed UTF-8 sequence starting at s[i] (RFC 3629), 0 when it is not one.
+std::size_t utf8_length(std::string_view s, std::size_t i) {
+    const auto byte = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
+    const unsigned char c = byte(i);
+    if (c < 0x80) return 1;
+    std::size_t n = 0;
+    unsigned char lo = 0x80;
+    unsigned char hi = 0xBF;
+    if (c >= 0xC2 && c <= 0xDF) n = 2;
+    else if (c >= 0xE0 && c <= 0xEF) {
+        n = 3;
+        if (c == 0xE0) lo = 0xA0;  // no overlong forms
+        if (c == 0xED) hi = 0x9F;  // no UTF-16 surrogates
+    } else if (c >= 0xF0 && c <= 0xF4) {
+        n = 4;
+        if (c == 0xF0) lo = 0x90;
+        if (c == 0xF4) hi = 0x8F;  // at most U+10FFFF
+    } else {
+        return 0;
     }
-    return s;
+    if (i + n > s.size()) return 0;
+    if (byte(i + 1) < lo || byte(i + 1) > hi) return 0;
+    for (std::size_t k = 2; k < n; ++k) {
+        if (byte(i + k) < 0x80 || byte(i + k) > 0xBF) return 0;
+    }
+    return n;
 }
 
+std::string hex_byte(unsigned char u) {
+    constexpr std::string_view hex = "0123456789abcdef";
+    std::string out = "\\x";
+    out += hex[u >> 4U];
+    out += hex[u & 0xfU];
+    return out;
+}
+
+// 1-based line and column of a byte offset.
+std::pair<std::size_t, std::size_t> line_column(std::string_view text, std::size_t offset) {
+    std::size_t line = 1;
+    std::size_t col = 1;
+    const std::size_t upto = std::min(offset, text.size());
+    for (std::size_t i = 0; i < upto; ++i) {
+        if (text[i] == '\n') {
+            ++line;
+            col = 1;
+        } else {
+            ++col;
+        }
+    }
+    return {line, col};
+}
+
+// Tracks where the parser is (object keys, list positions) to name a duplicate key's path.
+class KeyTracker {
+public:
+    void start(bool object) { frames_.push_back(Frame{object, {}, {}, 0}); }
+    void end() {
+        if (!frames_.empty()) frames_.pop_back();
+        next();
+    }
+    void value() { next(); }
+    void key(const std::string& k) {
+        if (frames_.empty()) return;
+        Frame& f = frames_.back();
+        f.key = k;
+        if (!f.keys.insert(k).second && duplicate_.empty()) duplicate_ = path();
+    }
+    [[nodiscard]] const std::string& duplicate() const { return duplicate_; }
+
+private:
+    struct Frame {
+        bool object = true;
+        std::set<std::string> keys;
+        std::string key;
+        std::size_t index = 0;
+    };
+    void next() {
+        if (!frames_.empty() && !frames_.back().object) ++frames_.back().index;
+    }
+    [[nodiscard]] std::string path() const {
+        std::string p;
+        for (const Frame& f : frames_) {
+            if (f.object) p += (p.empty() ? "" : ".") + printable(f.key, 40);
+            else p += "[" + std::to_string(f.index) + "]";
+        }
+        return p;
+    }
+    std::vector<Frame> frames_;
+    std::string duplicate_;
+};
+
+// "1.5e-07" rather than fmt's default for odd values; plain for the usual ones.
+std::string plain(double v) { return fmt::format("{:g}", v); }
+
 }  // namespace
+
+bool is_utf8(std::string_view text) {
+    for (std::size_t i = 0; i < text.size();) {
+        const std::size_t n = utf8_length(text, i);
+        if (n == 0) return false;
+        i += n;
+    }
+    return true;
+}
+
+std::string printable(std::string_view text, std::size_t max_chars) {
+    std::string out;
+    std::size_t shown = 0;
+    for (std::size_t i = 0; i < text.size();) {
+        if (shown++ >= max_chars) {
+            out += "...";
+            break;
+        }
+        const auto u = static_cast<unsigned char>(text[i]);
+        const std::size_t n = utf8_length(text, i);
+        if (n == 0 || u < 0x20 || u == 0x7f) {
+            out += hex_byte(u);
+            ++i;
+        } else if (n == 2 && u == 0xC2 && static_cast<unsigned char>(text[i + 1]) < 0xA0) {
+            // C1 control characters (U+0080..U+009F) can steer a terminal too.
+            out += hex_byte(u);
+            out += hex_byte(static_cast<unsigned char>(text[i + 1]));
+            i += 2;
+        } else {
+            out.append(text.substr(i, n));
+            i += n;
+        }
+    }
+    return out;
+}
 
 std::string read_text(const std::string& path, std::size_t max_bytes) {
     std::string data;
@@ -78,47 +199,34 @@ std::string read_text(const std::string& path, std::size_t max_bytes) {
     return data;
 }
 
-Json parse_json(std::string_view text, const std::string& file, std::size_t max_bytes) {
+Json parse_json(std::string_view text, const std::string& file, std::size_t max_bytes, std::string_view expected) {
     if (text.size() > max_bytes) {
         throw InputError(fmt::format("{}: larger than {} bytes; this is not a coilfit file", file, max_bytes));
     }
     std::size_t first = 0;
     while (first < text.size() && std::isspace(static_cast<unsigned char>(text[first]))) ++first;
-    if (first == text.size()) throw InputError(file + ": the file is empty; expected a JSON object");
+    if (first == text.size()) throw InputError(fmt::format("{}: the file is empty; expected {}", file, expected));
     check_depth(text, file);
+    // Duplicate keys: nlohmann keeps the last silently; detect them with a callback.
+    KeyTracker keys;
+    const auto cb = [&keys](int, nlohmann::json::parse_event_t event, Json& parsed) {
+        using E = nlohmann::json::parse_event_t;
+        switch (event) {
+        case E::object_start: keys.start(true); break;
+        case E::array_start: keys.start(false); break;
+        case E::object_end:
+        case E::array_end: keys.end(); break;
+        case E::key: keys.key(parsed.get_ref<const std::string&>()); break;
+        case E::value: keys.value(); break;
+        }
+        return true;
+    };
+    Json j;
     try {
-        // Duplicate keys: nlohmann keeps the last silently; detect them with a callback.
-        std::vector<std::set<std::string>> seen;
-        std::string duplicate;
-        const auto cb = [&](int depth, nlohmann::json::parse_event_t event, Json& parsed) {
-            const auto d = static_cast<std::size_t>(depth);
-            if (event == nlohmann::json::parse_event_t::object_start) {
-                // Keys of this object arrive one level deeper than its start.
-                if (seen.size() <= d + 1) seen.resize(d + 2);
-                seen[d + 1].clear();
-            } else if (event == nlohmann::json::parse_event_t::key) {
-                if (seen.size() <= d) seen.resize(d + 1);
-                const auto& key = parsed.get_ref<const std::string&>();
-                if (!seen[d].insert(key).second && duplicate.empty()) duplicate = key;
-            }
-            return true;
-        };
-        Json j = Json::parse(text.begin(), text.end(), cb);
-        if (!duplicate.empty()) throw InputError(file + ": key \"" + shorten(duplicate, 40) + "\" appears twice in one object");
-        return j;
+        j = Json::parse(text.begin(), text.end(), cb);
     } catch (const nlohmann::json::parse_error& e) {
         // e.byte is 1-based; turn it into line:column.
-        std::size_t line = 1;
-        std::size_t col = 1;
-        const std::size_t upto = std::min<std::size_t>(e.byte > 0 ? e.byte - 1 : 0, text.size());
-        for (std::size_t i = 0; i < upto; ++i) {
-            if (text[i] == '\n') {
-                ++line;
-                col = 1;
-            } else {
-                ++col;
-            }
-        }
+        const auto [line, col] = line_column(text, e.byte > 0 ? e.byte - 1 : 0);
         std::string what = e.what();
         // "[json.exception.parse_error.101] parse error at line 1, column 2: syntax error while
         // parsing value - invalid literal; last read: 'x'" -> keep the part after "- ".
@@ -126,31 +234,36 @@ Json parse_json(std::string_view text, const std::string& file, std::size_t max_
         std::string reason = dash == std::string::npos ? std::string("invalid JSON") : what.substr(dash + 3);
         const auto last = reason.find("; last read");
         if (last != std::string::npos) reason = reason.substr(0, last);
-        throw InputError(fmt::format("{}:{}:{}: not valid JSON: {}", file, line, col, shorten(reason, 80)));
+        throw InputError(fmt::format("{}:{}:{}: not valid JSON: {}", file, line, col, printable(reason, 80)));
+    } catch (const nlohmann::json::exception& e) {
+        // A number too large for a double: "number overflow parsing '1e400'". Find it for the
+        // line and column.
+        const std::string what = e.what();
+        const auto open = what.find('\'');
+        const auto close = what.rfind('\'');
+        if (open != std::string::npos && close > open) {
+            const std::string number = what.substr(open + 1, close - open - 1);
+            const auto at = text.find(number);
+            const auto [line, col] = line_column(text, at == std::string_view::npos ? 0 : at);
+            throw InputError(fmt::format("{}:{}:{}: not valid JSON: the number {} is out of range", file, line, col,
+                                         printable(number, 40)));
+        }
+        throw InputError(fmt::format("{}: not valid JSON", file));
     }
+    if (!keys.duplicate().empty()) {
+        throw InputError(fmt::format("{}: {}: the key appears twice in one object", file, keys.duplicate()));
+    }
+    return j;
 }
 
 std::string describe(const Json& j) {
     switch (j.type()) {
-    case Json::value_t::string: {
-        const auto& s = j.get_ref<const Json::string_t&>();
-        std::string out = "\"";
-        std::size_t n = 0;
-        for (const char c : s) {
-            if (++n > 40) {
-                out += "...";
-                break;
-            }
-            const auto u = static_cast<unsigned char>(c);
-            out += (u < 0x20 || u == 0x7f) ? '?' : c;
-        }
-        return out + "\"";
-    }
+    case Json::value_t::string: return "\"" + printable(j.get_ref<const Json::string_t&>(), 40) + "\"";
     case Json::value_t::boolean: return j.get<bool>() ? "true" : "false";
     case Json::value_t::null: return "null";
     case Json::value_t::object: return "an object";
     case Json::value_t::array: return "a list";
-    default: return shorten(j.dump(), 40);
+    default: return printable(j.dump(), 40);
     }
 }
 
@@ -183,13 +296,17 @@ void ObjectReader::fail_at(const std::string& key, const std::string& what) cons
 
 std::optional<double> ObjectReader::quantity(const std::string& key, Unit unit) {
     const Json* v = get(key);
+    units_[key] = unit;
     if (!v) return std::nullopt;
     double value = 0;
     if (v->is_number()) {
         value = v->get<double>();
+        plain_numbers_.insert(key);
     } else if (v->is_string()) {
+        const auto& text = v->get_ref<const Json::string_t&>();
+        if (unit == Unit::ratio && text.find('%') == std::string::npos) plain_numbers_.insert(key);
         try {
-            value = parse_quantity(v->get_ref<const Json::string_t&>(), unit);
+            value = parse_quantity(text, unit);
         } catch (const InputError& e) {
             fail_at(key, e.what());
         }
@@ -197,6 +314,7 @@ std::optional<double> ObjectReader::quantity(const std::string& key, Unit unit) 
         fail_at(key, fmt::format("expected {} such as \"{}\", got {}", unit_noun(unit), unit_example(unit), describe(*v)));
     }
     if (!std::isfinite(value)) fail_at(key, fmt::format("expected {}, got a number out of range", unit_noun(unit)));
+    if (value == 0) value = 0.0;  // no "-0" in reports
     return value;
 }
 
@@ -211,37 +329,59 @@ std::optional<std::string> ObjectReader::text(const std::string& key, std::size_
     if (!v) return std::nullopt;
     if (!v->is_string()) fail_at(key, "expected a text in quotes, got " + describe(*v));
     const auto& s = v->get_ref<const Json::string_t&>();
-    if (s.size() > max_len) fail_at(key, fmt::format("longer than {} characters", max_len));
+    if (s.size() > max_len) fail_at(key, fmt::format("expected a text of at most {} characters, got {}", max_len, s.size()));
+    // Texts reach terminals and JSON reports: no control characters, only UTF-8 (a flag's
+    // value is not checked by the JSON parser).
+    if (!is_utf8(s)) fail_at(key, "expected UTF-8 text, got \"" + printable(s) + "\"");
+    if (printable(s, s.size()) != s) fail_at(key, "expected a text without control characters, got \"" + printable(s) + "\"");
     return s;
 }
 
 std::string ObjectReader::required_text(const std::string& key, std::size_t max_len) {
     auto v = text(key, max_len);
-    if (!v) fail_at(key, "missing");
+    if (!v) fail_at(key, "missing; expected a text in quotes");
     return *v;
 }
 
+std::string ObjectReader::noun(const std::string& key) const {
+    const auto it = units_.find(key);
+    return std::string(unit_noun(it == units_.end() ? Unit::number : it->second));
+}
+
+std::string ObjectReader::show(const std::string& key, double value) const {
+    const auto it = units_.find(key);
+    const Unit unit = it == units_.end() ? Unit::number : it->second;
+    return format_quantity(value, unit, 6);
+}
+
 double ObjectReader::positive(const std::string& key, double value) const {
-    if (!(value > 0)) fail_at(key, "must be greater than zero, got " + fmt::format("{:g}", value));
+    if (!(value > 0)) fail_at(key, fmt::format("expected {} greater than zero, got {}", noun(key), show(key, value)));
     return value;
 }
 
 double ObjectReader::non_negative(const std::string& key, double value) const {
-    if (value < 0) fail_at(key, "must not be negative, got " + fmt::format("{:g}", value));
+    if (!(value >= 0)) fail_at(key, fmt::format("expected {} of zero or more, got {}", noun(key), show(key, value)));
     return value;
 }
 
 double ObjectReader::fraction(const std::string& key, double value, double lo, double hi, bool hi_inclusive) const {
     const bool ok = value >= lo && (hi_inclusive ? value <= hi : value < hi);
     if (!ok) {
-        fail_at(key, fmt::format("must be from {:g} % to {}{:g} %, got {:g} %", lo * 100,
-                                 hi_inclusive ? "" : "below ", hi * 100, value * 100));
+        // 10 written as a plain number means 1000 %: say how to write a percentage.
+        const bool hint = value > 1 && plain_numbers_.count(key) > 0;
+        fail_at(key, fmt::format("expected {} from {} to {}{}, got {}{}", noun(key), format_quantity(lo, Unit::ratio, 6),
+                                 hi_inclusive ? "" : "below ", format_quantity(hi, Unit::ratio, 6),
+                                 format_quantity(value, Unit::ratio, 6),
+                                 hint ? fmt::format(" (a plain number is a fraction: write \"{}%\" or {})", plain(value), plain(value / 100))
+                                      : std::string()));
     }
     return value;
 }
 
 double ObjectReader::within(const std::string& key, double value, double lo, double hi) const {
-    if (value < lo || value > hi) fail_at(key, fmt::format("must be from {:g} to {:g}, got {:g}", lo, hi, value));
+    if (!(value >= lo && value <= hi)) {
+        fail_at(key, fmt::format("expected {} from {} to {}, got {}", noun(key), show(key, lo), show(key, hi), show(key, value)));
+    }
     return value;
 }
 
@@ -250,7 +390,7 @@ void ObjectReader::finish() const {
         if (used_.count(key) == 0) {
             std::string known;
             for (const auto& k : used_) known += (known.empty() ? "" : ", ") + k;
-            io::fail(origin_, path_of(key), "unknown key (expected one of: " + known + ")");
+            io::fail(origin_, path_of(printable(key, 40)), "unknown key (expected one of: " + known + ")");
         }
     }
 }

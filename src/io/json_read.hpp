@@ -27,9 +27,11 @@ struct Origin {
 
 [[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);
 
-// Parses JSON text; rejects documents over max_bytes, nested deeper than 64 levels, with
-// invalid UTF-8 or duplicate keys, and says where.
-[[nodiscard]] Json parse_json(std::string_view text, const std::string& file, std::size_t max_bytes);
+// Parses JSON text; rejects empty documents, documents over max_bytes, nested deeper than 64
+// levels, with invalid UTF-8, numbers out of range or duplicate keys, and says where.
+// `expected` names what the document should hold, for the message about an empty file.
+[[nodiscard]] Json parse_json(std::string_view text, const std::string& file, std::size_t max_bytes,
+                              std::string_view expected = "a JSON object");
 // Reads a whole file (or standard input for "-"), at most max_bytes.
 [[nodiscard]] std::string read_text(const std::string& path, std::size_t max_bytes);
 
@@ -43,13 +45,18 @@ public:
     [[nodiscard]] std::string path_of(const std::string& key) const;
     [[noreturn]] void fail_at(const std::string& key, const std::string& what) const;
 
-    // A quantity (number in SI, or a string with unit); checks it is finite.
+    // A quantity (number in SI, or a string with unit); checks it is finite. The reader keeps
+    // the unit per key, so that the range checks below word their messages in it.
     [[nodiscard]] std::optional<double> quantity(const std::string& key, Unit unit);
     [[nodiscard]] double required(const std::string& key, Unit unit);
+    // A text in quotes: valid UTF-8, no control characters, at most max_len bytes.
     [[nodiscard]] std::optional<std::string> text(const std::string& key, std::size_t max_len = 200);
     [[nodiscard]] std::string required_text(const std::string& key, std::size_t max_len = 200);
 
-    // Range checks, naming the field: value > 0; lo <= value < hi (fractions); etc.
+    // Range checks, naming the field and what was expected:
+    //   "expected a resistance greater than zero, got -3 Ω"
+    //   "expected a ratio from 0 % to below 100 %, got 120 %"
+    //   "expected a voltage from 100 mV to 1 kV, got 2 kV"
     double positive(const std::string& key, double value) const;
     double non_negative(const std::string& key, double value) const;
     double fraction(const std::string& key, double value, double lo, double hi, bool hi_inclusive) const;
@@ -64,9 +71,20 @@ private:
     const Origin& origin_;
     std::string path_;
     std::set<std::string> used_;
+    std::map<std::string, Unit> units_;       // unit of each quantity read, for messages
+    std::set<std::string> plain_numbers_;     // keys given as JSON numbers (no unit written)
+
+    [[nodiscard]] std::string show(const std::string& key, double value) const;
+    [[nodiscard]] std::string noun(const std::string& key) const;
 };
 
 // Describes a JSON value briefly for messages: "\"fourty\"", "true", "an object", ...
 [[nodiscard]] std::string describe(const Json& j);
+
+// Text made safe for a one-line message: control characters and bytes that are not UTF-8
+// become \xNN, and the text is cut after max_chars code points with "...".
+[[nodiscard]] std::string printable(std::string_view text, std::size_t max_chars = 40);
+// True when text is well-formed UTF-8 (no overlong forms, no surrogates, at most U+10FFFF).
+[[nodiscard]] bool is_utf8(std::string_view text);
 
 }  // namespace coilfit::io

@@ -7,6 +7,8 @@
 
 #include <fmt/format.h>
 
+#include "io/spec_io.hpp"
+
 namespace coilfit::io {
 namespace {
 
@@ -42,13 +44,28 @@ void check_sorted(const ObjectReader& r, const std::string& key, const std::vect
     }
 }
 
+// Plausible ranges of datasheet figures: wide enough for any small-signal to power part, narrow
+// enough that a unit slip ("600" amperes for 600 mA) or a stray exponent is caught.
+double current(ObjectReader& r, const std::string& key, double value) { return r.within(key, r.positive(key, value), 1e-9, 1e4); }
+
 SaturationPoint read_saturation(ObjectReader& p) {
     SaturationPoint s;
-    s.ic_a = p.positive("ic", p.required("ic", Unit::ampere));
-    s.ib_a = p.positive("ib", p.required("ib", Unit::ampere));
-    s.v_max = p.within("max", p.required("max", Unit::volt), 0.001, 10.0);
-    if (s.ib_a > s.ic_a) p.fail_at("ib", "a base current above the collector current is not a saturation test condition");
+    s.ic_a = current(p, "ic", p.required("ic", Unit::ampere));
+    s.ib_a = current(p, "ib", p.required("ib", Unit::ampere));
+    s.v_max = p.within("max", p.positive("max", p.required("max", Unit::volt)), 0.001, 10.0);
+    if (s.ib_a > s.ic_a) {
+        p.fail_at("ib", fmt::format("expected a base current at most the test's ic {} (a saturation test condition), got {}",
+                                    format_quantity(s.ic_a, Unit::ampere, 6), format_quantity(s.ib_a, Unit::ampere, 6)));
+    }
     return s;
+}
+
+// Ids are how specs name parts: printable, not empty, no spaces at either end.
+std::string read_id(ObjectReader& r) {
+    std::string id = r.required_text("id", 64);
+    if (id.empty()) r.fail_at("id", "expected an id such as \"2N4401\", got an empty text");
+    if (id.front() == ' ' || id.back() == ' ') r.fail_at("id", "expected an id without spaces at either end, got \"" + id + "\"");
+    return id;
 }
 
 std::string read_source(ObjectReader& r) {
@@ -61,20 +78,24 @@ std::string read_source(ObjectReader& r) {
 
 Bipolar read_bipolar(ObjectReader& r) {
     Bipolar p;
-    p.id = r.required_text("id", 64);
+    p.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
     if (kind == "npn") p.kind = BipolarKind::npn;
     else if (kind == "darlington") p.kind = BipolarKind::darlington;
     else r.fail_at("kind", "expected \"npn\" or \"darlington\", got \"" + kind + "\"");
-    p.ic_max_a = r.positive("ic_max", r.required("ic_max", Unit::ampere));
-    p.vceo_v = r.positive("vceo", r.required("vceo", Unit::volt));
+    p.ic_max_a = r.within("ic_max", r.positive("ic_max", r.required("ic_max", Unit::ampere)), 1e-6, 1e3);
+    p.vceo_v = r.within("vceo", r.positive("vceo", r.required("vceo", Unit::volt)), 1.0, 1e4);
     p.hfe_min = read_points<GainPoint>(r, "hfe_min", [](ObjectReader& pr) {
         GainPoint g;
-        g.ic_a = pr.positive("ic", pr.required("ic", Unit::ampere));
-        g.hfe_min = pr.within("min", pr.positive("min", pr.required("min", Unit::number)), 1e-3, 1e6);
+        g.ic_a = current(pr, "ic", pr.required("ic", Unit::ampere));
+        // A bipolar transistor's current gain is above 1 (a Darlington's up to about 10^5).
+        g.hfe_min = pr.within("min", pr.positive("min", pr.required("min", Unit::number)), 1.0, 1e6);
         if (auto typ = pr.quantity("typ", Unit::number)) {
-            if (*typ < g.hfe_min) pr.fail_at("typ", "the typical gain must not be below the minimum");
-            g.hfe_typ = pr.within("typ", *typ, 1e-3, 1e6);
+            g.hfe_typ = pr.within("typ", *typ, 1.0, 1e6);
+            if (*typ < g.hfe_min) {
+                pr.fail_at("typ", fmt::format("expected a typical gain of at least the minimum {}, got {}",
+                                              format_quantity(g.hfe_min, Unit::number, 6), format_quantity(*typ, Unit::number, 6)));
+            }
         }
         return g;
     }, true);
@@ -83,8 +104,8 @@ Bipolar read_bipolar(ObjectReader& r) {
     check_sorted(r, "vce_sat", p.vce_sat, [](const SaturationPoint& g) { return g.ic_a; });
     p.vbe_sat = read_points<SaturationPoint>(r, "vbe_sat", read_saturation, true);
     check_sorted(r, "vbe_sat", p.vbe_sat, [](const SaturationPoint& g) { return g.ic_a; });
-    p.pd_w = r.positive("pd", r.required("pd", Unit::watt));
-    if (auto rth = r.quantity("rth_ja", Unit::kelvin_per_watt)) p.rth_ja_k_per_w = r.positive("rth_ja", *rth);
+    p.pd_w = r.within("pd", r.positive("pd", r.required("pd", Unit::watt)), 1e-3, 1e3);
+    if (auto rth = r.quantity("rth_ja", Unit::kelvin_per_watt)) p.rth_ja_k_per_w = r.within("rth_ja", r.positive("rth_ja", *rth), 0.1, 5000.0);
     p.tj_max_c = r.within("tj_max", r.quantity("tj_max", Unit::celsius).value_or(150.0), 50.0, 250.0);
     p.package = r.text("package", 64).value_or("");
     p.description = r.text("description", 400).value_or("");
@@ -94,20 +115,20 @@ Bipolar read_bipolar(ObjectReader& r) {
 
 Diode read_diode(ObjectReader& r) {
     Diode d;
-    d.id = r.required_text("id", 64);
+    d.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
     if (kind == "rectifier") d.kind = DiodeKind::rectifier;
     else if (kind == "fast") d.kind = DiodeKind::fast;
     else if (kind == "signal") d.kind = DiodeKind::signal;
     else if (kind == "schottky") d.kind = DiodeKind::schottky;
     else r.fail_at("kind", "expected \"rectifier\", \"fast\", \"signal\" or \"schottky\", got \"" + kind + "\"");
-    d.vrrm_v = r.positive("vrrm", r.required("vrrm", Unit::volt));
-    d.if_avg_a = r.positive("if_avg", r.required("if_avg", Unit::ampere));
-    if (auto v = r.quantity("ifrm", Unit::ampere)) d.ifrm_a = r.positive("ifrm", *v);
-    if (auto v = r.quantity("ifsm", Unit::ampere)) d.ifsm_a = r.positive("ifsm", *v);
+    d.vrrm_v = r.within("vrrm", r.positive("vrrm", r.required("vrrm", Unit::volt)), 1.0, 1e4);
+    d.if_avg_a = r.within("if_avg", r.positive("if_avg", r.required("if_avg", Unit::ampere)), 1e-6, 1e3);
+    if (auto v = r.quantity("ifrm", Unit::ampere)) d.ifrm_a = current(r, "ifrm", *v);
+    if (auto v = r.quantity("ifsm", Unit::ampere)) d.ifsm_a = current(r, "ifsm", *v);
     d.vf = read_points<ForwardPoint>(r, "vf", [](ObjectReader& pr) {
         ForwardPoint f;
-        f.if_a = pr.positive("if", pr.required("if", Unit::ampere));
+        f.if_a = current(pr, "if", pr.required("if", Unit::ampere));
         f.vf_max_v = pr.within("max", pr.required("max", Unit::volt), 0.05, 10.0);
         return f;
     }, true);
@@ -121,13 +142,13 @@ Diode read_diode(ObjectReader& r) {
 
 Zener read_zener(ObjectReader& r) {
     Zener z;
-    z.id = r.required_text("id", 64);
+    z.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
     if (kind != "zener") r.fail_at("kind", "expected \"zener\", got \"" + kind + "\"");
     z.vz_v = r.within("vz", r.positive("vz", r.required("vz", Unit::volt)), 1.0, 1000.0);
     z.tolerance = r.fraction("tolerance", r.quantity("tolerance", Unit::ratio).value_or(0.05), 0.0, 0.5, true);
-    z.pd_w = r.positive("pd", r.required("pd", Unit::watt));
-    if (auto v = r.quantity("izt", Unit::ampere)) z.izt_a = r.positive("izt", *v);
+    z.pd_w = r.within("pd", r.positive("pd", r.required("pd", Unit::watt)), 1e-3, 1e3);
+    if (auto v = r.quantity("izt", Unit::ampere)) z.izt_a = current(r, "izt", *v);
     z.package = r.text("package", 64).value_or("");
     z.description = r.text("description", 400).value_or("");
     z.source = read_source(r);
@@ -141,34 +162,38 @@ const Preset* PartsTable::find_preset(std::string_view kind, std::string_view id
 }
 
 void parse_parts_text(std::string_view text, const std::string& file, PartsTable& into) {
-    const Json doc = parse_json(text, file, max_table_bytes);
+    const Json doc = parse_json(text, file, max_table_bytes, "a JSON list [ ... ] of part records");
     Origin origin{file, {}};
     if (!doc.is_array()) fail(origin, "", "expected a JSON list [ ... ] of part records, got " + describe(doc));
+    // Read into a copy and commit at the end: a file with an error adds nothing.
+    PartsTable table = into;
     // Ids already present (from earlier files) and where they came from.
     std::map<std::string, std::string> ids;
-    for (const auto& b : into.catalogue.bipolars) ids[b.id] = "an earlier file";
-    for (const auto& d : into.catalogue.diodes) ids[d.id] = "an earlier file";
-    for (const auto& z : into.catalogue.zeners) ids[z.id] = "an earlier file";
-    for (const auto& p : into.presets) ids[p.id] = "an earlier file";
+    for (const auto& b : table.catalogue.bipolars) ids[b.id] = "an earlier file";
+    for (const auto& d : table.catalogue.diodes) ids[d.id] = "an earlier file";
+    for (const auto& z : table.catalogue.zeners) ids[z.id] = "an earlier file";
+    for (const auto& p : table.presets) ids[p.id] = "an earlier file";
+    constexpr std::string_view kinds = "npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin";
     for (std::size_t i = 0; i < doc.size(); ++i) {
         const std::string path = "[" + std::to_string(i) + "]";
         ObjectReader r(doc[i], origin, path);
         const Json* kind_j = r.get("kind");
-        if (!kind_j || !kind_j->is_string()) r.fail_at("kind", "missing; expected npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin");
+        if (!kind_j) r.fail_at("kind", fmt::format("missing; expected {}", kinds));
+        if (!kind_j->is_string()) r.fail_at("kind", fmt::format("expected {}, got {}", kinds, describe(*kind_j)));
         const std::string kind = kind_j->get<std::string>();
         std::string id;
         if (kind == "npn" || kind == "darlington") {
-            into.catalogue.bipolars.push_back(read_bipolar(r));
-            id = into.catalogue.bipolars.back().id;
+            table.catalogue.bipolars.push_back(read_bipolar(r));
+            id = table.catalogue.bipolars.back().id;
         } else if (kind == "rectifier" || kind == "fast" || kind == "signal" || kind == "schottky") {
-            into.catalogue.diodes.push_back(read_diode(r));
-            id = into.catalogue.diodes.back().id;
+            table.catalogue.diodes.push_back(read_diode(r));
+            id = table.catalogue.diodes.back().id;
         } else if (kind == "zener") {
-            into.catalogue.zeners.push_back(read_zener(r));
-            id = into.catalogue.zeners.back().id;
+            table.catalogue.zeners.push_back(read_zener(r));
+            id = table.catalogue.zeners.back().id;
         } else if (kind == "coil" || kind == "pin") {
             Preset p;
-            p.id = r.required_text("id", 64);
+            p.id = read_id(r);
             p.kind = kind;
             p.description = r.text("description", 400).value_or("");
             p.source = read_source(r);
@@ -179,17 +204,20 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
                     (void)r.get(k);
                 }
             }
-            into.presets.push_back(std::move(p));
-            id = into.presets.back().id;
+            // The preset's fields are checked now, as a spec would read them: a bad preset
+            // rejects the table here rather than a spec that uses it later.
+            check_preset_fields(p.fields, kind, origin, path);
+            table.presets.push_back(std::move(p));
+            id = table.presets.back().id;
         } else {
-            r.fail_at("kind", "unknown kind \"" + kind + "\"; expected npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin");
+            r.fail_at("kind", fmt::format("unknown kind {}; expected {}", describe(*kind_j), kinds));
         }
         r.finish();
-        if (id.empty()) r.fail_at("id", "must not be empty");
         const auto [it, inserted] = ids.emplace(id, path);
         if (!inserted) r.fail_at("id", "duplicate id \"" + id + "\" (also at " + it->second + ")");
     }
-    into.files.push_back(file);
+    table.files.push_back(file);
+    into = std::move(table);
 }
 
 PartsTable load_parts(const std::string& path) {

@@ -8,6 +8,13 @@ namespace {
 constexpr double absolute_zero_c = -273.15;
 
 std::string pct(double x) { return fmt::format("{:g} %", x * 100.0); }
+std::string volts(double v) { return format_quantity(v, Unit::volt, 6); }
+
+// A field the spec needs; a preset may leave it to the spec (partial).
+std::optional<double> needed(ObjectReader& r, const std::string& key, Unit unit, bool partial) {
+    if (partial) return r.quantity(key, unit);
+    return r.required(key, unit);
+}
 
 // Reads a part field that is either a table id or an inline record.
 template <typename Part, typename Find, typename ReadInline>
@@ -50,15 +57,21 @@ Json with_preset(const Json& obj, const std::string& kind, const PartsTable& tab
 void read_supply(ObjectReader& r, Spec& s) {
     s.supply.voltage_v = r.within("voltage", r.positive("voltage", r.required("voltage", Unit::volt)), 0.1, 1000.0);
     if (auto t = r.quantity("tolerance", Unit::ratio)) {
-        s.supply.tolerance = r.fraction("tolerance", *t, 0.0, 1.0, false);
+        s.supply.tolerance = r.fraction("tolerance", *t, 0.0, 0.5, true);
     } else {
         s.defaults_used.push_back("supply.tolerance " + pct(s.supply.tolerance));
     }
 }
 
-double temperature(ObjectReader& r, const std::string& key, double value) {
-    if (value < absolute_zero_c) r.fail_at(key, fmt::format("{:g} °C is below absolute zero", value));
-    return r.within(key, value, -100.0, 250.0);
+// Plausible temperatures: ambient -100 °C to 250 °C; the coil's reference temperature (where
+// its resistance was measured) -55 °C to 125 °C. Together they keep the copper factor
+// 1 + alpha (T - T_ref) above 0.1, so no coil resistance comes out zero or negative.
+double temperature(ObjectReader& r, const std::string& key, double value, double lo = -100.0, double hi = 250.0) {
+    if (value < absolute_zero_c) {
+        r.fail_at(key, fmt::format("expected a temperature above absolute zero (-273.15 °C), got {}",
+                                   format_quantity(value, Unit::celsius)));
+    }
+    return r.within(key, value, lo, hi);
 }
 
 void read_ambient(ObjectReader& r, Spec& s) {
@@ -67,51 +80,74 @@ void read_ambient(ObjectReader& r, Spec& s) {
     if (auto v = r.quantity("max", Unit::celsius)) s.ambient.max_c = temperature(r, "max", *v);
     else s.defaults_used.push_back(fmt::format("ambient.max {:g} °C", s.ambient.max_c));
     if (s.ambient.min_c > s.ambient.max_c) {
-        r.fail_at("min", fmt::format("{:g} °C is above ambient.max {:g} °C", s.ambient.min_c, s.ambient.max_c));
+        r.fail_at("min", fmt::format("expected at most ambient.max {}, got {}", format_quantity(s.ambient.max_c, Unit::celsius),
+                                     format_quantity(s.ambient.min_c, Unit::celsius)));
     }
 }
 
-void read_coil(ObjectReader& r, Spec& s) {
+void read_coil(ObjectReader& r, Spec& s, bool partial = false) {
     CoilSpec& c = s.coil;
+    if (partial && r.has("preset")) r.fail_at("preset", "expected no preset inside a preset");
     if (auto p = r.text("preset", 64)) c.preset = *p;
-    c.rated_voltage_v = r.within("rated_voltage", r.positive("rated_voltage", r.required("rated_voltage", Unit::volt)), 0.1, 1000.0);
-    c.resistance_ohm = r.within("resistance", r.positive("resistance", r.required("resistance", Unit::ohm)), 0.01, 1e7);
-    if (auto v = r.quantity("tolerance", Unit::ratio)) c.tolerance = r.fraction("tolerance", *v, 0.0, 1.0, false);
+    if (auto v = needed(r, "rated_voltage", Unit::volt, partial)) {
+        c.rated_voltage_v = r.within("rated_voltage", r.positive("rated_voltage", *v), 0.1, 1000.0);
+    }
+    if (auto v = needed(r, "resistance", Unit::ohm, partial)) {
+        c.resistance_ohm = r.within("resistance", r.positive("resistance", *v), 0.01, 1e7);
+    }
+    if (auto v = r.quantity("tolerance", Unit::ratio)) c.tolerance = r.fraction("tolerance", *v, 0.0, 0.5, true);
     else s.defaults_used.push_back("coil.tolerance " + pct(c.tolerance) + " (common practice)");
-    if (auto v = r.quantity("reference_temp", Unit::celsius)) c.reference_temp_c = temperature(r, "reference_temp", *v);
+    if (auto v = r.quantity("reference_temp", Unit::celsius)) c.reference_temp_c = temperature(r, "reference_temp", *v, -55.0, 125.0);
     else s.defaults_used.push_back(fmt::format("coil.reference_temp {:g} °C", c.reference_temp_c));
     if (auto v = r.quantity("must_operate", Unit::ratio)) {
-        if (*v > 1.0) r.fail_at("must_operate", fmt::format("must be at most 100 % of the rated voltage, got {}", pct(*v)));
-        c.must_operate = r.positive("must_operate", *v);
+        c.must_operate = r.fraction("must_operate", r.positive("must_operate", *v), 0.0, 1.0, true);
     } else {
         s.defaults_used.push_back("coil.must_operate " + pct(c.must_operate) + " of rated voltage (typical relay data)");
     }
-    if (auto v = r.quantity("must_release", Unit::ratio)) c.must_release = r.non_negative("must_release", *v);
+    if (auto v = r.quantity("must_release", Unit::ratio)) c.must_release = r.fraction("must_release", *v, 0.0, 1.0, false);
     else s.defaults_used.push_back("coil.must_release " + pct(c.must_release) + " of rated voltage (typical relay data)");
-    if (c.must_release >= c.must_operate) {
-        r.fail_at("must_release", fmt::format("{} must be below coil.must_operate {}", pct(c.must_release), pct(c.must_operate)));
+    const bool both_levels = !partial || (r.has("must_operate") && r.has("must_release"));
+    if (both_levels && c.must_release >= c.must_operate) {
+        r.fail_at("must_release", fmt::format("expected below coil.must_operate {}, got {}", pct(c.must_operate), pct(c.must_release)));
     }
     if (auto v = r.quantity("self_heating", Unit::kelvin)) c.self_heating_k = r.within("self_heating", *v, 0.0, 200.0);
     else s.defaults_used.push_back("coil.self_heating 0 K");
     if (auto v = r.quantity("inductance", Unit::henry)) c.inductance_h = r.within("inductance", r.positive("inductance", *v), 1e-6, 1e4);
-    if (auto v = r.quantity("max_voltage", Unit::volt)) c.max_voltage_v = r.positive("max_voltage", *v);
-    if (auto v = r.quantity("max_release_time", Unit::second)) c.max_release_time_s = r.positive("max_release_time", *v);
+    if (auto v = r.quantity("max_voltage", Unit::volt)) {
+        c.max_voltage_v = r.within("max_voltage", r.positive("max_voltage", *v), 0.1, 1000.0);
+        // Below the rated voltage is a typo: the coil could not be run at its own rating.
+        if ((!partial || r.has("rated_voltage")) && *c.max_voltage_v < c.rated_voltage_v) {
+            r.fail_at("max_voltage", fmt::format("expected at least coil.rated_voltage {}, got {}", volts(c.rated_voltage_v),
+                                                 volts(*c.max_voltage_v)));
+        }
+    }
+    if (auto v = r.quantity("max_release_time", Unit::second)) {
+        c.max_release_time_s = r.within("max_release_time", r.positive("max_release_time", *v), 1e-6, 100.0);
+    }
 }
 
-void read_pin(ObjectReader& r, Spec& s) {
+void read_pin(ObjectReader& r, Spec& s, bool partial = false) {
     PinSpec& p = s.pin;
+    if (partial && r.has("preset")) r.fail_at("preset", "expected no preset inside a preset");
     if (auto v = r.text("preset", 64)) p.preset = *v;
-    p.vdd_v = r.within("vdd", r.positive("vdd", r.required("vdd", Unit::volt)), 0.5, 60.0);
-    if (auto v = r.quantity("vdd_tolerance", Unit::ratio)) p.vdd_tolerance = r.fraction("vdd_tolerance", *v, 0.0, 1.0, false);
+    if (auto v = needed(r, "vdd", Unit::volt, partial)) p.vdd_v = r.within("vdd", r.positive("vdd", *v), 0.5, 60.0);
+    if (auto v = r.quantity("vdd_tolerance", Unit::ratio)) p.vdd_tolerance = r.fraction("vdd_tolerance", *v, 0.0, 0.5, true);
     else s.defaults_used.push_back("pin.vdd_tolerance " + pct(p.vdd_tolerance));
-    p.max_current_a = r.within("max_current", r.positive("max_current", r.required("max_current", Unit::ampere)), 1e-6, 10.0);
+    if (auto v = needed(r, "max_current", Unit::ampere, partial)) {
+        p.max_current_a = r.within("max_current", r.positive("max_current", *v), 1e-6, 10.0);
+    }
     if (auto v = r.quantity("voh", Unit::volt)) {
-        if (!(*v > 0) || *v > p.vdd_v) r.fail_at("voh", fmt::format("must be above 0 V and at most pin.vdd {:g} V, got {:g} V", p.vdd_v, *v));
+        if (!(*v > 0)) r.fail_at("voh", fmt::format("expected a voltage greater than zero, got {}", volts(*v)));
+        if ((!partial || r.has("vdd")) && *v > p.vdd_v) {
+            r.fail_at("voh", fmt::format("expected at most pin.vdd {}, got {}", volts(p.vdd_v), volts(*v)));
+        }
         p.voh_v = *v;
     }
-    if (auto v = r.quantity("voh_current", Unit::ampere)) p.voh_current_a = r.positive("voh_current", *v);
-    if (p.voh_v && !p.voh_current_a) r.fail_at("voh_current", "missing; pin.voh needs the current it is rated at");
-    if (p.voh_current_a && !p.voh_v) r.fail_at("voh", "missing; pin.voh_current needs the voltage rated at it");
+    if (auto v = r.quantity("voh_current", Unit::ampere)) p.voh_current_a = r.within("voh_current", r.positive("voh_current", *v), 1e-6, 10.0);
+    if (!partial) {
+        if (p.voh_v && !p.voh_current_a) r.fail_at("voh_current", "missing; pin.voh needs the current it is rated at, such as \"8mA\"");
+        if (p.voh_current_a && !p.voh_v) r.fail_at("voh", "missing; pin.voh_current needs the voltage rated at it, such as \"2.9V\"");
+    }
 }
 
 void read_clamp(ObjectReader& r, Spec& s, const PartsTable& table) {
@@ -155,7 +191,7 @@ void read_base_resistor(ObjectReader& r, Spec& s) {
         s.defaults_used.push_back("base_resistor.series E24");
     }
     if (auto v = r.quantity("tolerance", Unit::ratio)) {
-        b.tolerance = r.fraction("tolerance", *v, 0.0, 1.0, false);
+        b.tolerance = r.fraction("tolerance", *v, 0.0, 0.5, true);
     } else {
         b.tolerance = eseries_tolerance(b.series);
         s.defaults_used.push_back(fmt::format("base_resistor.tolerance {} (usual for {})", pct(b.tolerance), eseries_name(b.series)));
@@ -170,7 +206,8 @@ void read_policy(ObjectReader& r, Spec& s) {
     std::vector<std::string> defaulted;
     if (auto v = r.quantity("forced_gain", Unit::number)) p.forced_gain = r.within("forced_gain", r.positive("forced_gain", *v), 0.1, 1e5);
     else defaulted.push_back(s.transistor.kind == BipolarKind::darlington ? "forced gain at the part's Vce(sat) test ratio" : "forced gain 10");
-    if (auto v = r.quantity("overdrive", Unit::number)) p.overdrive = r.within("overdrive", r.positive("overdrive", *v), 0.1, 100.0);
+    // Overdrive below 1 would drive the base with less than the minimum gain needs.
+    if (auto v = r.quantity("overdrive", Unit::number)) p.overdrive = r.within("overdrive", r.positive("overdrive", *v), 1.0, 100.0);
     else defaulted.push_back("overdrive 2");
     if (auto v = r.quantity("current_derating", Unit::ratio)) p.current_derating = r.fraction("current_derating", r.positive("current_derating", *v), 0.0, 1.0, true);
     else defaulted.push_back("current derating 75 %");
@@ -194,9 +231,17 @@ void read_policy(ObjectReader& r, Spec& s) {
 SpecDocument parse_spec_text(std::string_view text, const std::string& file) {
     SpecDocument d;
     d.origin.file = file;
-    d.doc = parse_json(text, file, max_spec_bytes);
+    d.doc = parse_json(text, file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
     if (!d.doc.is_object()) fail(d.origin, "", "expected a JSON object { \"schema\": \"coilfit.spec/1\", ... }, got " + describe(d.doc));
     return d;
+}
+
+void check_preset_fields(const Json& fields, const std::string& kind, const Origin& origin, const std::string& path) {
+    Spec scratch;
+    ObjectReader r(fields, origin, path);
+    if (kind == "coil") read_coil(r, scratch, true);
+    else read_pin(r, scratch, true);
+    r.finish();
 }
 
 SpecDocument load_spec_document(const std::string& path) {
@@ -241,13 +286,19 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
     const Json* schema = top.get("schema");
     if (!schema) top.fail_at("schema", fmt::format("missing; expected \"{}\"", spec_schema));
     if (!schema->is_string() || schema->get<std::string>() != spec_schema) {
-        top.fail_at("schema", fmt::format("unknown schema {}; this coilfit reads \"{}\"", describe(*schema), spec_schema));
+        top.fail_at("schema", fmt::format("expected \"{}\" (the schema this coilfit reads), got {}", spec_schema, describe(*schema)));
     }
     s.name = top.text("name", 200).value_or("");
 
     auto section = [&](const std::string& key, bool required) -> const Json* {
         const Json* j = top.get(key);
-        if (!j && required) top.fail_at(key, "missing");
+        if (!j && required) {
+            const char* example = key == "supply" ? R"({ "voltage": "12V", "tolerance": "10%" })"
+                                  : key == "coil" ? R"({ "rated_voltage": "12V", "resistance": "400R", ... } or { "preset": ID })"
+                                  : key == "pin"  ? R"({ "vdd": "3.3V", "max_current": "8mA", ... } or { "preset": ID })"
+                                                  : R"({ "type": "diode", "diode": ID })";
+            top.fail_at(key, fmt::format("missing; expected an object such as {}", example));
+        }
         return j;
     };
 
@@ -309,12 +360,12 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
     if (const Json* j = section("load", false)) {
         ObjectReader r(*j, d.origin, "load");
         LoadSpec load;
-        load.voltage_v = r.non_negative("voltage", r.required("voltage", Unit::volt));
-        const std::string kind = r.text("kind", 8).value_or("ac");
+        load.voltage_v = r.within("voltage", r.non_negative("voltage", r.required("voltage", Unit::volt)), 0.0, 1e5);
+        const std::string kind = r.text("kind", 16).value_or("ac");
         if (kind == "ac") load.kind = LoadKind::ac;
         else if (kind == "dc") load.kind = LoadKind::dc;
         else r.fail_at("kind", "expected \"ac\" or \"dc\", got \"" + kind + "\"");
-        if (auto i = r.quantity("current", Unit::ampere)) load.current_a = r.non_negative("current", *i);
+        if (auto i = r.quantity("current", Unit::ampere)) load.current_a = r.within("current", r.non_negative("current", *i), 0.0, 1e4);
         r.finish();
         s.load = load;
     }
