@@ -108,6 +108,11 @@ void read_coil(ObjectReader& r, Spec& s, bool partial = false) {
     else s.defaults_used.push_back("coil.must_release " + pct(c.must_release) + " of rated voltage (typical relay data)");
     const bool both_levels = !partial || (r.has("must_operate") && r.has("must_release"));
     if (both_levels && c.must_release >= c.must_operate) {
+        // Name the field the user wrote: must_operate when must_release is the default.
+        if (!r.has("must_release")) {
+            r.fail_at("must_operate", fmt::format("expected above coil.must_release {} (the default; give coil.must_release), got {}",
+                                                  pct(c.must_release), pct(c.must_operate)));
+        }
         r.fail_at("must_release", fmt::format("expected below coil.must_operate {}, got {}", pct(c.must_operate), pct(c.must_release)));
     }
     if (auto v = r.quantity("self_heating", Unit::kelvin)) c.self_heating_k = r.within("self_heating", *v, 0.0, 200.0);
