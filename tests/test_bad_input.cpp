@@ -441,11 +441,30 @@ TEST_SUITE("bad input") {
             CHECK(c->verdict == Verdict::fail);
             CHECK_FALSE(c->message.empty());
         }
+        // No transistor would do: the advice is about the pin, not about more gain.
+        CHECK(r.find_check("pin.current")->message ==
+              "the pin's lowest VDD 475 mV does not reach Vbe(sat) 950 mV: no base resistor and no gain can switch this "
+              "transistor on; use a pin with a higher supply or a buffer");
         for (const auto& q : r.quantities) CHECK(std::isfinite(q.value));
         const std::string text = io::render_text(r, s, io::TextStyle{});
         CHECK(text.find("nan") == std::string::npos);
         CHECK(text.find("inf") == std::string::npos);
         CHECK(text.find("n/a") == std::string::npos);
+    }
+
+    TEST_CASE("a supply below Vce(sat) gives the coil nothing: a failed check that says so") {
+        // 0.2 V supply and 1 Ω coil: about 260 mA flows at the high corner, where the 2N4401's
+        // Vce(sat) alone is more than the 0.18 V lowest supply.
+        io::SpecDocument d = io::parse_spec_text(base_spec, "spec.json");
+        io::set_field(d, "supply.voltage", "0.2V", "--supply");
+        io::set_field(d, "coil.rated_voltage", "0.2V", "--coil-voltage");
+        io::set_field(d, "coil.resistance", "1R", "--coil-resistance");
+        const Spec s = io::read_spec(d, table());
+        const SizingReport r = size(s, table().catalogue);
+        const Check* c = r.find_check("coil.operate");
+        REQUIRE(c != nullptr);
+        CHECK(c->verdict == Verdict::fail);
+        CHECK(c->message.find("takes the whole lowest supply 180 mV, so the coil gets no voltage") != std::string::npos);
     }
 
     TEST_CASE("no clamp is a failed transistor.voltage check with advice") {

@@ -27,6 +27,13 @@ std::string check_message(CheckId id, const Spec& spec, const Evaluation& e, con
                    " at the lowest supply; hot (" + q(e.coil_temp_hot_c, Unit::celsius) + ") it needs " +
                    q(e.operate_voltage_hot_v, Unit::volt) + " to operate";
         }
+        if (e.coil_voltage_min_v <= 0) {
+            // The transistor's saturation voltage alone takes the whole lowest supply.
+            return "Vce(sat) " + q(e.vce_sat_v, Unit::volt) + " takes the whole lowest supply " +
+                   q(e.coil_voltage_min_v + e.vce_sat_v, Unit::volt) + ", so the coil gets no voltage but needs " +
+                   q(e.operate_voltage_hot_v, Unit::volt) + " to operate when hot: the supply is far too low for this "
+                   "coil and transistor";
+        }
         return "the coil gets only " + q(e.coil_voltage_min_v, Unit::volt) +
                " at the lowest supply but needs " + q(e.operate_voltage_hot_v, Unit::volt) +
                " to operate when hot (" + q(e.coil_temp_hot_c, Unit::celsius) +
@@ -87,6 +94,13 @@ std::string check_message(CheckId id, const Spec& spec, const Evaluation& e, con
                " (Tj max less " + q(p.junction_margin_k, Unit::kelvin) + ")" +
                (ok ? std::string() : ": use a transistor in a larger package or with a lower Vce(sat)");
     case CheckId::pin_current: {
+        if (e.base_resistor_ohm <= 0 && e.vbe_sat_v >= spec.pin.vdd_v * (1 - spec.pin.vdd_tolerance)) {
+            // No gain helps when the pin's own voltage does not reach Vbe(sat).
+            return "the pin's lowest VDD " + q(spec.pin.vdd_v * (1 - spec.pin.vdd_tolerance), Unit::volt) +
+                   " does not reach Vbe(sat) " + q(e.vbe_sat_v, Unit::volt) +
+                   ": no base resistor and no gain can switch this transistor on; use a pin with a higher supply or a "
+                   "buffer";
+        }
         if (e.base_resistor_ohm <= 0) {
             return "no base resistor can be chosen, so the pin cannot drive this transistor; a part with "
                    "hFE of at least " + format_quantity(e.hfe_needed, Unit::number) + " at " +
