@@ -54,7 +54,8 @@ Decay rl_decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_rele
     // integral of (A e^{-t/tau} - a)^2 over [0, T]
     const double t = d.end_time_s;
     if (a > 0) {
-        const double e1 = std::exp(-t / d.tau_s);
+        // exp(-t/tau) at t = tau ln(1 + I0/a) is exactly a / (I0 + a): no exp needed.
+        const double e1 = a / big_a;
         d.i2_integral = big_a * big_a * d.tau_s / 2.0 * (1.0 - e1 * e1) -
                         2.0 * big_a * a * d.tau_s * (1.0 - e1) + a * a * t;
     } else {

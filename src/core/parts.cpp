@@ -85,7 +85,8 @@ double vce_sat_test_ratio(const Bipolar& part, double ic_a) {
     if (part.vce_sat.empty()) return 10.0;
     const auto nearest = std::min_element(
         part.vce_sat.begin(), part.vce_sat.end(), [&](const SaturationPoint& a, const SaturationPoint& b) {
-            return std::abs(std::log(a.ic_a / ic_a)) < std::abs(std::log(b.ic_a / ic_a));
+            // nearest on a log scale: |ln r| grows with max(r, 1/r), so compare those (no log)
+            return std::max(a.ic_a / ic_a, ic_a / a.ic_a) < std::max(b.ic_a / ic_a, ic_a / b.ic_a);
         });
     return nearest->ic_a / nearest->ib_a;
 }
