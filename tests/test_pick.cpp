@@ -5,7 +5,7 @@
 
 #include "coilfit/pick.hpp"
 #include "coilfit/sizing.hpp"
-#include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 namespace io = coilfit::io;
@@ -13,14 +13,13 @@ namespace io = coilfit::io;
 namespace {
 
 struct Setup {
-    io::PartsTable table;
+    const io::PartsTable& table = test::shipped_table();
     Spec spec;
 };
 
 Setup load(const std::string& example) {
     Setup s;
-    s.table = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    s.spec = io::read_spec(io::load_spec_document(std::string(COILFIT_TEST_EXAMPLES_DIR) + "/" + example), s.table);
+    s.spec = test::load_example(example);
     return s;
 }
 

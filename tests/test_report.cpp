@@ -7,6 +7,7 @@
 #include "coilfit/sizing.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 namespace io = coilfit::io;
@@ -14,14 +15,13 @@ namespace io = coilfit::io;
 namespace {
 
 struct Loaded {
-    io::PartsTable table;
+    const io::PartsTable& table = test::shipped_table();
     Spec spec;
 };
 
 Loaded load_example(const std::string& name) {
     Loaded l;
-    l.table = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    l.spec = io::read_spec(io::load_spec_document(std::string(COILFIT_TEST_EXAMPLES_DIR) + "/" + name), l.table);
+    l.spec = test::load_example(name);
     return l;
 }
 

@@ -2,6 +2,7 @@
 #include <doctest/doctest.h>
 
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 namespace io = coilfit::io;
@@ -9,10 +10,7 @@ using doctest::Approx;
 
 namespace {
 
-const io::PartsTable& table() {
-    static const io::PartsTable t = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    return t;
-}
+const io::PartsTable& table() { return test::shipped_table(); }
 
 const char* minimal = R"({ "schema": "coilfit.spec/1",
   "supply": { "voltage": "12V" },
