@@ -237,7 +237,7 @@ CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
             }
             return std::string();
         },
-        "UINT");
+        "");
 }
 
 }  // namespace
