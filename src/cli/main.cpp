@@ -39,6 +39,10 @@ int main(int argc, char** argv) {
     } catch (const std::exception& e) {
         std::cerr << "coilfit: error: " << e.what() << "\n";
         return exit_bad_input;
+    } catch (...) {
+        // Nothing escapes main (style.md, "Errors").
+        std::cerr << "coilfit: error: an unexpected internal error\n";
+        return exit_bad_input;
     }
     return exit_bad_input;
 }
