@@ -90,7 +90,9 @@ struct YieldCounts {
     YieldCounts& operator+=(const YieldCounts& other);
 };
 
-// Evaluates samples [first, last) of the design (box, rb_ohm) and tallies them.
+// Evaluates samples [first, last) of the design (box, rb_ohm) and tallies them. Inputs whose
+// band is one point (and the gain of a part without typical values) are not drawn: their
+// position has no effect, and each input has a stream of its own.
 [[nodiscard]] YieldCounts count_samples(const Spec& spec, const Conditions& box, double rb_ohm,
                                         const YieldSettings& settings, std::uint64_t first, std::uint64_t last);
 

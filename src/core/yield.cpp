@@ -134,19 +134,26 @@ YieldCounts count_samples(const Spec& spec, const Conditions& box, double rb_ohm
                           std::uint64_t first, std::uint64_t last) {
     std::array<std::uint64_t, yield_input_count> keys{};
     for (std::size_t s = 0; s < yield_input_count; ++s) keys[s] = stream_key(settings.seed, s);
-    // Without a typical gain the position has no effect (typical falls back to the minimum);
-    // holding it at 0 spares evaluate() a lookup.
+    // An input whose band is a single point needs no draw: its position has no effect. The gain
+    // has none without a typical value (typical falls back to the minimum); holding it at 0 also
+    // spares evaluate() a lookup. Streams are independent, so skipping one changes no other.
     const auto& gain_points = spec.transistor.hfe_min;
-    const bool gain_varies =
+    std::array<bool, yield_input_count> varies{};
+    varies[static_cast<std::size_t>(YieldInput::supply)] = box.vs_lo_v != box.vs_hi_v;
+    varies[static_cast<std::size_t>(YieldInput::ambient)] = box.ta_lo_c != box.ta_hi_c;
+    varies[static_cast<std::size_t>(YieldInput::pin_vdd)] = box.vdd_lo_v != box.vdd_hi_v;
+    varies[static_cast<std::size_t>(YieldInput::coil_resistance)] = box.r_coil_lo_ohm != box.r_coil_hi_ohm;
+    varies[static_cast<std::size_t>(YieldInput::base_resistor)] = box.rb_lo_factor != box.rb_hi_factor;
+    varies[static_cast<std::size_t>(YieldInput::zener)] = box.vz_lo_v != box.vz_hi_v;
+    varies[static_cast<std::size_t>(YieldInput::gain)] =
         std::any_of(gain_points.begin(), gain_points.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
-    constexpr auto gain = static_cast<std::size_t>(YieldInput::gain);
     YieldCounts counts;
     for (std::uint64_t i = first; i < last; ++i) {
         BandPositions t{};
         for (std::size_t s = 0; s < yield_input_count; ++s) {
+            if (!varies[s]) continue;
             t[s] = position_of(static_cast<YieldInput>(s), unit_uniform(stream_bits(keys[s], i)), settings.distribution);
         }
-        if (!gain_varies) t[gain] = 0.0;
         const Evaluation e = evaluate(spec, conditions_at(box, t), rb_ohm);
         bool pass = true;
         for (std::size_t k = 0; k < check_count; ++k) {
