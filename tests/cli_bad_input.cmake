@@ -48,3 +48,9 @@ coilfit_bad_input(bad-parts-table-rejected-whole
 coilfit_bad_input(pick-bad-input
   "coilfit: error: --ambient-min: expected at most ambient.max 40.0 °C, got 60.0 °C"
   ARGS pick lab-valve.json --ambient-min 60C)
+coilfit_bad_input(flags-only-names-the-missing-flag
+  "coilfit: error: command line: coil.rated_voltage: missing; expected a voltage such as \"12V\" (give --coil-voltage)"
+  ARGS size --supply 12V --coil-resistance 400R)
+coilfit_bad_input(flags-only-missing-section
+  "coilfit: error: command line: supply.voltage: missing; expected a voltage such as \"12V\" (give --supply)"
+  ARGS size --coil-resistance 400R)

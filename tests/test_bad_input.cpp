@@ -382,6 +382,18 @@ TEST_SUITE("bad input") {
 
     TEST_CASE("bad flag values exit 2 naming the flag instead of the file") { check_rows(flag_rows()); }
 
+    TEST_CASE("a spec of flags alone names the flag that gives a missing field") {
+        io::SpecDocument d = io::flags_only_document();
+        d.origin.flag_names = {{"supply.voltage", "--supply"}, {"coil.rated_voltage", "--coil-voltage"}};
+        io::set_field(d, "coil.resistance", "400R", "--coil-resistance");
+        CHECK_THROWS_WITH_AS((void)io::read_spec(d, table()),
+                             "command line: supply.voltage: missing; expected a voltage such as \"12V\" (give --supply)", InputError);
+        io::set_field(d, "supply.voltage", "12V", "--supply");
+        CHECK_THROWS_WITH_AS((void)io::read_spec(d, table()),
+                             "command line: coil.rated_voltage: missing; expected a voltage such as \"12V\" (give --coil-voltage)",
+                             InputError);
+    }
+
     TEST_CASE("a table file with an error adds nothing to the table") {
         io::PartsTable t;
         io::parse_parts_text(table_of(good_zener), "parts/a.json", t);

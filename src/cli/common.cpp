@@ -95,6 +95,7 @@ io::SpecDocument build_spec_document(const SpecOptions& options) {
     if (options.spec_path.empty() && options.values.empty()) {
         throw InputError("no spec: give a spec file (or - for standard input), or the spec fields as flags (see --help)");
     }
+    for (const SpecFlag& f : spec_flags) d.origin.flag_names.emplace(f.path, f.flag);
     for (std::size_t i = 0; i < options.values.size(); ++i) {
         io::set_field(d, options.values[i].first, options.values[i].second, options.flag_of[i].second);
     }

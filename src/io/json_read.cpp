@@ -17,6 +17,11 @@ void fail(const Origin& origin, const std::string& path, const std::string& what
     if (flag != origin.flags.end()) throw InputError(flag->second + ": " + what);
     std::string msg = origin.file;
     if (!path.empty()) msg += (msg.empty() ? "" : ": ") + path;
+    if (origin.flags_only && what.rfind("missing", 0) == 0) {
+        if (const auto name = origin.flag_names.find(path); name != origin.flag_names.end()) {
+            throw InputError(msg + ": " + what + " (give " + name->second + ")");
+        }
+    }
     throw InputError(msg + ": " + what);
 }
 

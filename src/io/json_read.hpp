@@ -23,6 +23,10 @@ using Json = nlohmann::ordered_json;
 struct Origin {
     std::string file;                           // "spec.json", "<stdin>", "parts/bipolar.json"
     std::map<std::string, std::string> flags;   // "supply.voltage" -> "--supply"
+    // A spec made of flags alone: a missing field's message names the flag that gives it,
+    // from flag_names (every field the command line can set -> its flag).
+    bool flags_only = false;
+    std::map<std::string, std::string> flag_names;
 };
 
 [[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);

@@ -163,7 +163,8 @@ const Preset* PartsTable::find_preset(std::string_view kind, std::string_view id
 
 void parse_parts_text(std::string_view text, const std::string& file, PartsTable& into) {
     const Json doc = parse_json(text, file, max_table_bytes, "a JSON list [ ... ] of part records");
-    Origin origin{file, {}};
+    Origin origin;
+    origin.file = file;
     if (!doc.is_array()) fail(origin, "", "expected a JSON list [ ... ] of part records, got " + describe(doc));
     // Read into a copy and commit at the end: a file with an error adds nothing.
     PartsTable table = into;

@@ -257,6 +257,7 @@ SpecDocument load_spec_document(const std::string& path) {
 SpecDocument flags_only_document() {
     SpecDocument d;
     d.origin.file = "command line";
+    d.origin.flags_only = true;
     d.doc = Json::object();
     d.doc["schema"] = spec_schema;
     return d;
@@ -297,6 +298,10 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
 
     auto section = [&](const std::string& key, bool required) -> const Json* {
         const Json* j = top.get(key);
+        // Flags alone: read a missing section as empty, so that the message names the first
+        // missing field and its flag ("supply.voltage: missing; ... (give --supply)").
+        static const Json empty = Json::object();
+        if (!j && required && d.origin.flags_only) return &empty;
         if (!j && required) {
             const char* example = key == "supply" ? R"({ "voltage": "12V", "tolerance": "10%" })"
                                   : key == "coil" ? R"({ "rated_voltage": "12V", "resistance": "400R", ... } or { "preset": ID })"
