@@ -127,6 +127,19 @@ TEST_SUITE("parts") {
         CHECK(coilfit::hfe_typ_at(b, 0.150).value == Approx(200.0));
     }
 
+    TEST_CASE("precomputed logs change no looked-up value") {
+        const auto t = parse(good_npn);
+        coilfit::Bipolar prepared = t.catalogue.bipolars[0];
+        coilfit::precompute_logs(prepared);
+        for (double ic = 1e-3; ic < 2.0; ic *= 1.37) {
+            CAPTURE(ic);
+            const auto& plain = t.catalogue.bipolars[0];
+            CHECK(coilfit::hfe_min_at(prepared, ic, std::log(ic)).value == Approx(coilfit::hfe_min_at(plain, ic).value).epsilon(1e-12));
+            CHECK(coilfit::vce_sat_at(prepared, ic, std::log(ic)).value == Approx(coilfit::vce_sat_at(plain, ic).value).epsilon(1e-12));
+            CHECK(coilfit::hfe_typ_at(prepared, ic).value == Approx(coilfit::hfe_typ_at(plain, ic).value).epsilon(1e-12));
+        }
+    }
+
     TEST_CASE("broken tables are rejected naming the file and the field") {
         CHECK_THROWS_WITH_AS(parse("[{ \"id\": \"Q1\", "), "parts/test.json:1:16: not valid JSON: unexpected end of input; expected string literal", InputError);
         CHECK_THROWS_WITH_AS(parse("{}"), "parts/test.json: expected a JSON list [ ... ] of part records, got an object", InputError);

@@ -26,8 +26,9 @@ struct ClampVoltages {
     bool limited = true;      // false for "none": only breakdown limits the voltage
 };
 
+// ln_i0 is ln(i0_a) when the caller has it (one log serves every lookup), else NaN.
 [[nodiscard]] ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v,
-                                           double vz_hi_v);
+                                           double vz_hi_v, double ln_i0 = ln_not_set);
 
 // The decay of the coil current through the clamp, closed form with Vc constant.
 struct Decay {

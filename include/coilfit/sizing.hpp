@@ -121,6 +121,10 @@ struct Evaluation {
 // given conditions. Pure, allocation-free, fast (Monte Carlo calls it millions of times).
 [[nodiscard]] Evaluation evaluate(const Spec& spec, const Conditions& conditions, double rb_ohm);
 
+// Fills the ln(current) points of the spec's transistor and clamp diode (see parts.hpp): a
+// speed-up for callers that evaluate one spec many times; results are unchanged.
+void precompute_logs(Spec& spec);
+
 // The largest value of the spec's series <= Rb_max, or the fixed value; nullopt when no value
 // of the series is small enough.
 [[nodiscard]] std::optional<double> choose_base_resistor(const Spec& spec, const Evaluation& worst);

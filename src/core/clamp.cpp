@@ -4,13 +4,13 @@
 
 namespace coilfit {
 
-ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v) {
+ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v, double ln_i0) {
     ClampVoltages out;
     if (clamp.type == ClampType::none || !clamp.diode) {
         out.limited = false;
         return out;
     }
-    const Lookup vf = vf_max_at(*clamp.diode, i0_a);
+    const Lookup vf = vf_max_at(*clamp.diode, i0_a, ln_i0);
     out.vf_outside = vf.outside;
     const double vf_lo = vf_low(*clamp.diode);
     switch (clamp.type) {

@@ -64,9 +64,14 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
     std::map<std::string, std::map<std::string, int>> family_fails;
     std::map<std::string, Evaluation> family_eval;
 
+    // Each part is evaluated with many partners: its ln(current) points once.
+    for (auto& d : diodes) {
+        if (d) precompute_logs(*d);
+    }
     Spec trial = spec;
     for (const Bipolar& t : catalogue.bipolars) {
         trial.transistor = t;
+        precompute_logs(trial.transistor);
         for (const auto& d : diodes) {
             trial.clamp.diode = d;
             const Sized sized = size_numbers(trial);

@@ -122,7 +122,9 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
     e.coil_current_nominal_a = spec.supply.voltage_v / coil.resistance_ohm;
     // Highest current: highest supply into the coldest, lowest coil (Vce(sat) neglected).
     e.coil_current_max_a = c.vs_hi_v / e.r_coil_cold_ohm;
-    const Lookup vce = vce_sat_at(tr, e.coil_current_max_a);
+    // One log of the operating current serves every table lookup below.
+    const double ln_i0 = std::log(e.coil_current_max_a);
+    const Lookup vce = vce_sat_at(tr, e.coil_current_max_a, ln_i0);
     e.vce_sat_v = vce.value;
     e.vce_outside = vce.outside;
     // Lowest coil voltage: lowest supply less the saturation voltage.
@@ -138,12 +140,12 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
     if (coil.max_voltage_v) set(CheckId::coil_overvoltage, at_most(e.coil_voltage_max_v, *coil.max_voltage_v));
 
     // --- Base drive (method.md "Base drive") ---
-    const Lookup hfe_min = hfe_min_at(tr, e.coil_current_max_a);
+    const Lookup hfe_min = hfe_min_at(tr, e.coil_current_max_a, ln_i0);
     e.hfe_min = hfe_min.value;
     e.hfe_outside = hfe_min.outside;
     e.hfe = e.hfe_min;
     if (c.hfe_position > 0) {
-        const double typ = hfe_typ_at(tr, e.coil_current_max_a).value;
+        const double typ = hfe_typ_at(tr, e.coil_current_max_a, ln_i0).value;
         e.hfe = e.hfe_min + c.hfe_position * (std::max(typ, e.hfe_min) - e.hfe_min);
     }
     e.forced_gain_policy = default_forced_gain(spec, e.coil_current_max_a);
@@ -151,7 +153,7 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
     e.base_current_required_a = e.coil_current_max_a / e.beta_target;
     // The minimum gain this pin can serve: k * I_max / I_pin (common practice).
     e.hfe_needed = policy.overdrive * e.coil_current_max_a / spec.pin.max_current_a;
-    const Lookup vbe = vbe_sat_at(tr, e.coil_current_max_a);
+    const Lookup vbe = vbe_sat_at(tr, e.coil_current_max_a, ln_i0);
     e.vbe_sat_v = vbe.value;
     e.vbe_outside = vbe.outside;
     e.vce_sat_test_ratio = vce_sat_test_ratio(tr, e.coil_current_max_a);
@@ -207,7 +209,7 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
 
     // --- Clamp (method.md "Clamp (flyback) and timing") ---
     const double i0 = e.coil_current_max_a;
-    e.clamp = clamp_voltages(spec.clamp, i0, c.vz_lo_v, c.vz_hi_v);
+    e.clamp = clamp_voltages(spec.clamp, i0, c.vz_lo_v, c.vz_hi_v, ln_i0);
     if (e.clamp.limited) {
         // Peak collector voltage: highest supply plus the highest clamp voltage.
         e.peak_collector_voltage_v = c.vs_hi_v + e.clamp.peak_v;
@@ -238,7 +240,8 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
         const double vc_energy = spec.clamp.type == ClampType::diode_resistor
                                      ? e.clamp.peak_v - i0 * e.clamp.series_ohm
                                      : e.clamp.peak_v;
-        const Decay hot = rl_decay(l, r_loop, vc_energy, i0, e.release_current_a);
+        // Only its charge and heat are used: a release current of I0 spares the release log.
+        const Decay hot = rl_decay(l, r_loop, vc_energy, i0, i0);
         e.clamp_energy_j = clamp_energy(hot, vc_energy, e.clamp.series_ohm);
         if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));
         if (spec.switching_frequency_hz) {
@@ -276,6 +279,11 @@ Evaluation evaluate(const Spec& spec, const Conditions& c, double rb_ohm) {
         }
     }
     return e;
+}
+
+void precompute_logs(Spec& spec) {
+    precompute_logs(spec.transistor);
+    if (spec.clamp.diode) precompute_logs(*spec.clamp.diode);
 }
 
 std::optional<double> choose_base_resistor(const Spec& spec, const Evaluation& worst) {

@@ -211,7 +211,10 @@ YieldResult summarise_yield(const Sized& design, const YieldSettings& settings, 
     return r;
 }
 
-YieldResult run_yield(const Spec& spec, const YieldSettings& settings, const YieldProgress& progress) {
+YieldResult run_yield(const Spec& given, const YieldSettings& settings, const YieldProgress& progress) {
+    // The parts' ln(current) points once, so each sample's table lookups share one log.
+    Spec spec = given;
+    precompute_logs(spec);
     const Sized design = size_numbers(spec);
     const double rb_ohm = design.rb_ohm.value_or(0.0);
     const std::uint64_t total = settings.samples;
