@@ -141,7 +141,7 @@ private:
     std::string duplicate_;
 };
 
-// "1.5e-07" rather than fmt's default for odd values; plain for the usual ones.
+// A plain number for a message: "10", "0.1", "1e-07".
 std::string plain(double v) { return fmt::format("{:g}", v); }
 
 }  // namespace
