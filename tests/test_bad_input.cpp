@@ -133,8 +133,12 @@ Outcome run(const BadInput& row) {
     return out;
 }
 
+// "5 files": the messages count the files of the shipped table.
+std::string table_files() { return std::to_string(table().files.size()) + " files"; }
+
 std::vector<BadInput> spec_rows() {
     const Source S = Source::spec;
+    const std::string files = table_files();
     const std::string long_name(201, 'x');
     return {
         // The document itself.
@@ -231,7 +235,7 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: pin.voh_current: missing; pin.voh needs the current it is rated at, such as "8mA")"},
         // Parts named by the spec.
         {S, spec_with("transistor", "2N9999"), 2,
-         "spec.json: transistor: no transistor \"2N9999\" in the parts table (5 files); `coilfit parts` lists it"},
+         "spec.json: transistor: no transistor \"2N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
         {S, spec_with("transistor", 42), 2,
          "spec.json: transistor: expected transistor id such as a text in quotes, or an inline record, got 42"},
         {S, spec_with("transistor", with_json(good_npn, "vceo", nullptr)), 2,
@@ -250,7 +254,7 @@ std::vector<BadInput> spec_rows() {
         {S, with(spec_with("clamp.type", "diode_resistor"), "clamp.resistor", "0R"), 2,
          "spec.json: clamp.resistor: expected a resistance greater than zero, got 0 Ω"},
         {S, spec_with("clamp.diode", "1N9999"), 2,
-         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (5 files); `coilfit parts` lists it"},
+         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
         // Base resistor, pull-down, policy.
         {S, spec_with("base_resistor.series", "E7"), 2,
          R"(spec.json: base_resistor.series: expected one of E3, E6, E12, E24, E48, E96, E192, got "E7")"},
@@ -336,6 +340,7 @@ std::vector<BadInput> parts_rows() {
 
 std::vector<BadInput> flag_rows() {
     const Source F = Source::flag;
+    const std::string files = table_files();
     return {
         {F, "abc", 2, R"(--supply: expected a voltage such as "12V", got "abc")", "supply.voltage", "--supply"},
         {F, "-3", 2, "--coil-resistance: expected a resistance greater than zero, got -3 Ω", "coil.resistance", "--coil-resistance"},
@@ -344,7 +349,7 @@ std::vector<BadInput> flag_rows() {
         {F, "zener", 2, R"(--clamp: expected "diode", "diode_zener", "diode_resistor" or "none", got "zener")", "clamp.type", "--clamp"},
         {F, "K2 \x1b[2J", 2, R"(--name: expected a text without control characters, got "K2 \x1b[2J")", "name", "--name"},
         {F, "K2 \xff\xfe", 2, R"(--name: expected UTF-8 text, got "K2 \xff\xfe")", "name", "--name"},
-        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table (5 files); `coilfit parts` lists it)", "transistor",
+        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts` lists it", "transistor",
          "--transistor"},
         {F, "120%", 2, "--must-operate: expected a ratio from 0 % to 100 %, got 120 %", "coil.must_operate", "--must-operate"},
         {F, "0", 2, "--overdrive: expected a number greater than zero, got 0", "policy.overdrive", "--overdrive"},
@@ -419,7 +424,7 @@ TEST_SUITE("bad input") {
 
     TEST_CASE("the shipped parts table loads whole") {
         const io::PartsTable& t = table();
-        CHECK(t.files.size() == 5);
+        CHECK(t.files.size() >= 5);
         CHECK(t.catalogue.bipolars.size() >= 10);
         CHECK(t.presets.size() >= 10);
     }
