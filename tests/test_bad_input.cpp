@@ -17,16 +17,14 @@
 #include "io/parts_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 namespace io = coilfit::io;
 
 namespace {
 
-const io::PartsTable& table() {
-    static const io::PartsTable t = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    return t;
-}
+const io::PartsTable& table() { return test::shipped_table(); }
 
 // Demo data: the lab valve manifold's 24 V valve coil on a 3.3 V pin.
 const char* base_spec = R"({

@@ -12,16 +12,14 @@
 #include "coilfit/sizing.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 using doctest::Approx;
 
 namespace {
 
-const io::PartsTable& table() {
-    static const io::PartsTable t = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    return t;
-}
+const io::PartsTable& table() { return test::shipped_table(); }
 
 Spec spec_from(const std::string& json) { return io::read_spec(io::parse_spec_text(json, "clamp-test.json"), table()); }
 

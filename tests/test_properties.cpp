@@ -19,16 +19,14 @@
 #include "io/parts_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 namespace io = coilfit::io;
 
 namespace {
 
-const io::PartsTable& table() {
-    static const io::PartsTable t = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    return t;
-}
+const io::PartsTable& table() { return test::shipped_table(); }
 
 // SplitMix64 (Steele, Lea, Flood 2014): small, fast, the same numbers on every platform.
 class Random {

@@ -7,15 +7,13 @@
 #include "coilfit/yield.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
+#include "support.hpp"
 
 using namespace coilfit;
 
 namespace {
 
-const io::PartsTable& table() {
-    static const io::PartsTable t = io::load_parts(COILFIT_TEST_PARTS_DIR);
-    return t;
-}
+const io::PartsTable& table() { return test::shipped_table(); }
 
 Spec load(const std::string& path) { return io::read_spec(io::load_spec_document(path), table()); }
 Spec example(const char* name) { return load(std::string(COILFIT_TEST_EXAMPLES_DIR) + "/" + name); }
