@@ -127,6 +127,25 @@ TEST_SUITE("parts") {
         CHECK(coilfit::hfe_typ_at(b, 0.150).value == Approx(200.0));
     }
 
+    TEST_CASE("the Vce(sat) test ratio is the one of the point nearest on a log scale") {
+        coilfit::Bipolar b;
+        b.vce_sat = {{0.010, 0.0005, 0.3}, {0.100, 0.010, 0.5}};  // Ic/Ib 20 and 10
+        // The geometric mean sqrt(10 mA * 100 mA) = 31.6 mA divides the two (a linear rule would
+        // keep the 10 mA point up to 55 mA).
+        CHECK(coilfit::vce_sat_test_ratio(b, 0.030) == Approx(20.0));
+        CHECK(coilfit::vce_sat_test_ratio(b, 0.033) == Approx(10.0));
+        CHECK(coilfit::vce_sat_test_ratio(b, 0.001) == Approx(20.0));
+        CHECK(coilfit::vce_sat_test_ratio(b, 2.0) == Approx(10.0));
+        coilfit::Bipolar prepared = b;
+        coilfit::precompute_logs(prepared);
+        for (double ic = 1e-3; ic < 2.0; ic *= 1.07) {
+            CAPTURE(ic);
+            CHECK(coilfit::vce_sat_test_ratio(prepared, ic, std::log(ic)) == coilfit::vce_sat_test_ratio(b, ic));
+        }
+        b.vce_sat.clear();
+        CHECK(coilfit::vce_sat_test_ratio(b, 0.1) == Approx(10.0));  // common practice when not given
+    }
+
     TEST_CASE("precomputed logs change no looked-up value") {
         const auto t = parse(good_npn);
         coilfit::Bipolar prepared = t.catalogue.bipolars[0];

@@ -3,6 +3,7 @@
 #include <doctest/doctest.h>
 
 #include <cmath>
+#include <vector>
 
 #include "coilfit/sizing.hpp"
 
@@ -257,5 +258,88 @@ TEST_SUITE("sizing") {
         bool pulldown = false;
         for (const auto& n : r.notes) pulldown = pulldown || n.find("pull-down") != std::string::npos;
         CHECK(pulldown);
+    }
+
+    TEST_CASE("a check's margin is its headroom as a fraction of the limit") {
+        // Definition (method.md, "Report"): (limit - value)/|limit| for an upper bound,
+        // (value - limit)/|limit| for a lower one.
+        using Bound = CheckValue::Bound;
+        CHECK(CheckValue{9.0, 10.0, Verdict::pass, Bound::at_most, true}.margin() == Approx(0.1));
+        CHECK(CheckValue{12.0, 10.0, Verdict::fail, Bound::at_most, true}.margin() == Approx(-0.2));
+        CHECK(CheckValue{8.0, 10.0, Verdict::fail, Bound::at_least, true}.margin() == Approx(-0.2));
+        CHECK(CheckValue{-3.0, -2.0, Verdict::pass, Bound::at_most, true}.margin() == Approx(0.5));
+        CHECK(CheckValue{0.0, 0.0, Verdict::pass, Bound::at_most, true}.margin() == 0.0);
+        CHECK(CheckValue{1.0, 0.0, Verdict::fail, Bound::at_most, true}.margin() == -1.0);
+        CHECK(CheckValue{0.0, 5.0, Verdict::fail, Bound::at_most, false}.margin() == -1.0);
+        CHECK(CheckValue{}.margin() == 0.0);  // skipped
+    }
+
+    TEST_CASE("a prepared spec, and checks-only figures, give the same checks as the plain evaluation") {
+        // Yield evaluates a prepared spec with Figures::checks; size() the plain form. The
+        // worst-case invariant needs both to give the very same numbers, bit for bit.
+        std::vector<Spec> specs;
+        Spec base = hand_spec();
+        base.coil.inductance_h = 0.9;
+        specs.push_back(base);
+        Spec rated = base;
+        rated.switching_frequency_hz = 5.0;
+        rated.coil.max_release_time_s = 0.004;
+        rated.coil.max_voltage_v = 13.0;
+        rated.pulldown_ohm = 47e3;
+        specs.push_back(rated);
+        Spec zener = rated;
+        zener.clamp.type = ClampType::diode_zener;
+        zener.clamp.zener = Zener{"TEST-Z", 12.0, 0.05, 0.5, 0.02, "", "", "test data"};
+        specs.push_back(zener);
+        Spec resistor = rated;
+        resistor.clamp.type = ClampType::diode_resistor;
+        resistor.clamp.resistor_ohm = 470.0;
+        resistor.coil.max_release_time_s.reset();
+        specs.push_back(resistor);
+        Spec release_only = base;
+        release_only.coil.max_release_time_s = 0.01;
+        specs.push_back(release_only);
+        Spec darlington = rated;
+        darlington.transistor.kind = BipolarKind::darlington;
+        darlington.transistor.vce_sat = {{0.01, 0.00001, 0.9}, {0.5, 0.0005, 1.1}};
+        specs.push_back(darlington);
+        Spec no_clamp = base;
+        no_clamp.clamp.type = ClampType::none;
+        no_clamp.clamp.diode.reset();
+        specs.push_back(no_clamp);
+        for (Spec& spec : specs) {
+            precompute_logs(spec);
+            const Prepared prepared = prepare(spec);
+            const Sized sized = size_numbers(spec);
+            Conditions corner = sized.conditions;
+            corner.vs_lo_v = corner.vs_hi_v = 11.5;
+            corner.ta_lo_c = corner.ta_hi_c = 41.0;
+            corner.hfe_position = 0.3;
+            for (const Conditions& c : {sized.conditions, corner}) {
+                for (double rb : {0.0, sized.rb_ohm.value_or(1000.0), 270.0}) {
+                    CAPTURE(clamp_type_name(spec.clamp.type));
+                    CAPTURE(rb);
+                    const Evaluation plain = evaluate(spec, c, rb);
+                    const Evaluation all = evaluate(prepared, c, rb);
+                    const Evaluation checks = evaluate(prepared, c, rb, Figures::checks);
+                    CHECK(all.release_time_s == plain.release_time_s);
+                    CHECK(all.clamp_energy_j == plain.clamp_energy_j);
+                    CHECK(all.base_resistor_max_ohm == plain.base_resistor_max_ohm);
+                    CHECK(all.junction_temp_max_c == plain.junction_temp_max_c);
+                    for (std::size_t k = 0; k < check_count; ++k) {
+                        CAPTURE(check_id_name(static_cast<CheckId>(k)));
+                        for (const Evaluation* e : {&all, &checks}) {
+                            const CheckValue& got = e->checks[k];
+                            const CheckValue& want = plain.checks[k];
+                            CHECK(got.verdict == want.verdict);
+                            CHECK(got.has_value == want.has_value);
+                            CHECK(got.bound == want.bound);
+                            CHECK(got.value == want.value);
+                            CHECK(got.limit == want.limit);
+                        }
+                    }
+                }
+            }
+        }
     }
 }

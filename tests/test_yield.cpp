@@ -215,7 +215,7 @@ TEST_SUITE("yield") {
         s.seed = 42;
         s.samples = 1000;
         s.jobs = 1;
-        const YieldCounts head = count_samples(spec, one.design.conditions, one.design.rb_ohm.value_or(0), s, 0, 1000);
+        const YieldCounts head = count_samples(prepare(spec), one.design.conditions, one.design.rb_ohm.value_or(0), s, 0, 1000);
         const YieldResult short_run = run_yield(spec, s);
         CHECK(short_run.passed == head.passed);
     }
@@ -287,11 +287,11 @@ TEST_SUITE("yield") {
         double worst_margin = 1e9;
         for_each_vertex([&](const BandPositions& t) {
             const Evaluation e = evaluate(spec, conditions_at(design.conditions, t), rb);
-            worst_margin = std::min(worst_margin, e.check(CheckId::coil_operate).margin);
+            worst_margin = std::min(worst_margin, e.check(CheckId::coil_operate).margin());
         });
         CHECK(worst_margin < 0.0);
-        CHECK(worst_margin >= design.worst.check(CheckId::coil_operate).margin);
-        CHECK(worst_margin == doctest::Approx(design.worst.check(CheckId::coil_operate).margin).epsilon(0.02));
+        CHECK(worst_margin >= design.worst.check(CheckId::coil_operate).margin());
+        CHECK(worst_margin == doctest::Approx(design.worst.check(CheckId::coil_operate).margin()).epsilon(0.02));
         // And the yield run names it.
         YieldSettings st;
         st.samples = 20000;

@@ -110,6 +110,7 @@ void precompute_logs(Bipolar& part);
 void precompute_logs(Diode& part);
 // The forced gain Ic/Ib at which the part's Vce(sat) is specified nearest to ic_a.
 [[nodiscard]] double vce_sat_test_ratio(const Bipolar& part, double ic_a);
+[[nodiscard]] double vce_sat_test_ratio(const Bipolar& part, double ic_a, double ln_ic);
 // Maximum forward drop at a current.
 [[nodiscard]] Lookup vf_max_at(const Diode& part, double if_a);
 // The low forward drop used for timing: the part's vf_low, else 0.6 V silicon, 0.3 V Schottky.

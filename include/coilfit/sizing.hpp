@@ -73,11 +73,18 @@ struct Conditions {
 
 // One check evaluated numerically (no words).
 struct CheckValue {
-    Verdict verdict = Verdict::skip;
+    enum class Bound : std::uint8_t { at_most, at_least };
     double value = 0;
     double limit = 0;
-    double margin = 0;
-    bool has_value = false;  // false when the value cannot be computed (e.g. no clamp)
+    Verdict verdict = Verdict::skip;
+    Bound bound = Bound::at_most;  // the value must stay at most / at least the limit
+    bool has_value = false;        // false when the value cannot be computed (e.g. no clamp)
+
+    // Headroom as a fraction of the limit, negative when the check fails: (limit - value)/|limit|
+    // for an upper bound, (value - limit)/|limit| for a lower one. Against a zero limit it is 0
+    // or -1; without a value it is -1 for a failed check, 0 for a skipped one. Worked out on
+    // demand: Monte Carlo needs only the verdicts.
+    [[nodiscard]] double margin() const;
 };
 
 // Every figure of one evaluation, SI units. Cheap enough for Monte Carlo: no allocation.
@@ -117,9 +124,33 @@ struct Evaluation {
     [[nodiscard]] bool passes() const;  // no check failed (warnings pass)
 };
 
+// The pieces of evaluate() that depend on the spec alone, worked out once: Monte Carlo
+// evaluates one spec millions of times. It points at the spec, which must outlive it.
+struct Prepared {
+    const Spec* spec = nullptr;
+    double coil_current_nominal_a = 0;  // nominal supply / reference resistance
+    double release_current_a = 0;       // must-release voltage / reference resistance
+    double pin_r_out_ohm = 0;           // (VDD - VOH) / IOH, 0 when VOH is not given
+    double rth_ja_k_per_w = 0;
+    double derated_vceo_v = 0, derated_ic_a = 0, tj_limit_c = 0;
+    double resistor_power_limit_w = 0;
+    double diode_peak_limit_a = 0;      // repetitive peak, else surge, else average rating
+    double diode_rated_power_w = 0;     // if_avg * Vf(if_avg): a diode clamp's power limit
+};
+[[nodiscard]] Prepared prepare(const Spec& spec);
+
+// What evaluate() works out: every figure, or only what the checks need (Monte Carlo reads
+// verdicts alone). With `checks` the checks are the same; figures no check uses (the base
+// resistor window, the gain needed, the lowest coil current, stored energy, and the release
+// time, charge and clamp energy where no check reads them) are left at zero.
+enum class Figures : std::uint8_t { all, checks };
+
 // Evaluates the design with base resistor rb_ohm (0: no resistor could be chosen) over the
 // given conditions. Pure, allocation-free, fast (Monte Carlo calls it millions of times).
+// The first form prepares the spec on each call; both give the same figures.
 [[nodiscard]] Evaluation evaluate(const Spec& spec, const Conditions& conditions, double rb_ohm);
+[[nodiscard]] Evaluation evaluate(const Prepared& prepared, const Conditions& conditions, double rb_ohm,
+                                  Figures figures = Figures::all);
 
 // Fills the ln(current) points of the spec's transistor and clamp diode (see parts.hpp): a
 // speed-up for callers that evaluate one spec many times; results are unchanged.

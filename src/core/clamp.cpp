@@ -1,71 +1,19 @@
 #include "coilfit/clamp.hpp"
 
-#include <cmath>
+#include "clamp_math.hpp"
 
 namespace coilfit {
 
 ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v, double ln_i0) {
-    ClampVoltages out;
-    if (clamp.type == ClampType::none || !clamp.diode) {
-        out.limited = false;
-        return out;
-    }
-    const Lookup vf = vf_max_at(*clamp.diode, i0_a, ln_i0);
-    out.vf_outside = vf.outside;
-    const double vf_lo = vf_low(*clamp.diode);
-    switch (clamp.type) {
-    case ClampType::diode:
-        out.peak_v = vf.value;
-        out.timing_v = vf_lo;
-        break;
-    case ClampType::diode_zener:
-        out.peak_v = vz_hi_v + vf.value;
-        out.timing_v = vz_lo_v + vf_lo;
-        break;
-    case ClampType::diode_resistor: {
-        const double rs = clamp.resistor_ohm.value_or(0.0);
-        out.peak_v = i0_a * rs + vf.value;
-        out.timing_v = vf_lo;
-        out.series_ohm = rs;
-        break;
-    }
-    case ClampType::none: break;
-    }
-    return out;
+    return clamp_math::voltages(clamp, i0_a, vz_lo_v, vz_hi_v, ln_i0);
 }
 
 Decay rl_decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_release_a) {
-    Decay d;
-    if (!(l_h > 0) || !(r_ohm > 0) || !(i0_a > 0)) return d;
-    d.tau_s = l_h / r_ohm;
-    const double a = vc_v > 0 ? vc_v / r_ohm : 0.0;  // Vc/R
-    const double big_a = i0_a + a;                   // I0 + Vc/R
-    if (i0_a > i_release_a && i_release_a + a > 0) {
-        d.release_time_s = d.tau_s * std::log(big_a / (i_release_a + a));
-    }
-    if (a > 0) {
-        d.end_time_s = d.tau_s * std::log1p(i0_a / a);
-        d.charge_c = d.tau_s * i0_a - a * d.end_time_s;
-    } else {
-        // No clamp voltage: the current only decays exponentially; integrate to infinity.
-        d.end_time_s = 0;
-        d.charge_c = d.tau_s * i0_a;
-    }
-    // integral of (A e^{-t/tau} - a)^2 over [0, T]
-    const double t = d.end_time_s;
-    if (a > 0) {
-        // exp(-t/tau) at t = tau ln(1 + I0/a) is exactly a / (I0 + a): no exp needed.
-        const double e1 = a / big_a;
-        d.i2_integral = big_a * big_a * d.tau_s / 2.0 * (1.0 - e1 * e1) -
-                        2.0 * big_a * a * d.tau_s * (1.0 - e1) + a * a * t;
-    } else {
-        d.i2_integral = i0_a * i0_a * d.tau_s / 2.0;
-    }
-    return d;
+    return clamp_math::decay(l_h, r_ohm, vc_v, i0_a, i_release_a);
 }
 
 double clamp_energy(const Decay& decay, double vc_v, double series_ohm) {
-    return vc_v * decay.charge_c + series_ohm * decay.i2_integral;
+    return clamp_math::energy(decay, vc_v, series_ohm);
 }
 
 }  // namespace coilfit

@@ -88,8 +88,8 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
                 const CheckValue& v = e.checks[i];
                 if (v.verdict == Verdict::skip) continue;
                 if (v.verdict == Verdict::fail) c.failed.emplace_back(check_id_name(static_cast<CheckId>(i)));
-                if (first || v.margin < worst) {
-                    worst = v.margin;
+                if (first || v.margin() < worst) {
+                    worst = v.margin();
                     c.worst_check = std::string(check_id_name(static_cast<CheckId>(i)));
                     first = false;
                 }

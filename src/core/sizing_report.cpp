@@ -299,7 +299,7 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
         } else {
             if (c.has_value && std::isfinite(c.value)) out.value = c.value;
             if (std::isfinite(c.limit)) out.limit = c.limit;
-            if (std::isfinite(c.margin)) out.margin = c.margin;
+            if (const double m = c.margin(); std::isfinite(m)) out.margin = m;
             out.message = check_message(id, spec, e, c);
         }
         failed = failed || c.verdict == Verdict::fail;

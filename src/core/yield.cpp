@@ -130,14 +130,14 @@ YieldCounts& YieldCounts::operator+=(const YieldCounts& other) {
     return *this;
 }
 
-YieldCounts count_samples(const Spec& spec, const Conditions& box, double rb_ohm, const YieldSettings& settings,
+YieldCounts count_samples(const Prepared& prepared, const Conditions& box, double rb_ohm, const YieldSettings& settings,
                           std::uint64_t first, std::uint64_t last) {
     std::array<std::uint64_t, yield_input_count> keys{};
     for (std::size_t s = 0; s < yield_input_count; ++s) keys[s] = stream_key(settings.seed, s);
     // An input whose band is a single point needs no draw: its position has no effect. The gain
     // has none without a typical value (typical falls back to the minimum); holding it at 0 also
     // spares evaluate() a lookup. Streams are independent, so skipping one changes no other.
-    const auto& gain_points = spec.transistor.hfe_min;
+    const auto& gain_points = prepared.spec->transistor.hfe_min;
     std::array<bool, yield_input_count> varies{};
     varies[static_cast<std::size_t>(YieldInput::supply)] = box.vs_lo_v != box.vs_hi_v;
     varies[static_cast<std::size_t>(YieldInput::ambient)] = box.ta_lo_c != box.ta_hi_c;
@@ -154,7 +154,7 @@ YieldCounts count_samples(const Spec& spec, const Conditions& box, double rb_ohm
             if (!varies[s]) continue;
             t[s] = position_of(static_cast<YieldInput>(s), unit_uniform(stream_bits(keys[s], i)), settings.distribution);
         }
-        const Evaluation e = evaluate(spec, conditions_at(box, t), rb_ohm);
+        const Evaluation e = evaluate(prepared, conditions_at(box, t), rb_ohm, Figures::checks);
         bool pass = true;
         for (std::size_t k = 0; k < check_count; ++k) {
             const Verdict v = e.checks[k].verdict;
@@ -216,6 +216,7 @@ YieldResult run_yield(const Spec& given, const YieldSettings& settings, const Yi
     Spec spec = given;
     precompute_logs(spec);
     const Sized design = size_numbers(spec);
+    const Prepared prepared = prepare(spec);
     const double rb_ohm = design.rb_ohm.value_or(0.0);
     const std::uint64_t total = settings.samples;
     const std::uint64_t chunks = (total + chunk_samples - 1) / chunk_samples;
@@ -230,7 +231,7 @@ YieldResult run_yield(const Spec& given, const YieldSettings& settings, const Yi
             if (k >= chunks) break;
             const std::uint64_t first = k * chunk_samples;
             const std::uint64_t last = std::min(total, first + chunk_samples);
-            counts += count_samples(spec, design.conditions, rb_ohm, settings, first, last);
+            counts += count_samples(prepared, design.conditions, rb_ohm, settings, first, last);
             const std::uint64_t now = done.fetch_add(last - first) + (last - first);
             if (report && progress) progress(now, total);
         }

@@ -1,0 +1,99 @@
+// The characteristic-curve lookups of parts.hpp, defined inline so that the sizing core's hot
+// path (evaluate(), millions of times in yield) compiles them in place. Internal to the core:
+// parts.cpp's public functions are these same functions, so every caller gets the same numbers.
+#pragma once
+
+#include <cmath>
+#include <cstddef>
+
+#include "coilfit/parts.hpp"
+
+namespace coilfit::curves {
+
+// Linear interpolation of y on log(x) over points sorted by x; nearest point outside.
+// ln_x is ln(x) or NaN (then computed only when needed); ln_p gives a point's ln(x) or NaN.
+template <typename Points, typename X, typename LnX, typename Y>
+inline Lookup interpolate_log(const Points& points, double x, double ln_x, X get_x, LnX get_ln, Y get_y) {
+    if (points.empty() || !(x > 0)) return {points.empty() ? 0.0 : get_y(points.front()), true};
+    if (points.size() == 1) {
+        // One point is used everywhere; flag it when the operating point is more than a
+        // factor of two away from it.
+        const double ratio = x / get_x(points.front());
+        return {get_y(points.front()), ratio > 2.0 || ratio < 0.5};
+    }
+    if (x <= get_x(points.front())) {
+        return {get_y(points.front()), x < get_x(points.front()) * (1.0 - 1e-9)};
+    }
+    if (x >= get_x(points.back())) {
+        return {get_y(points.back()), x > get_x(points.back()) * (1.0 + 1e-9)};
+    }
+    const auto ln_of = [&](const auto& p) {
+        const double l = get_ln(p);
+        return std::isnan(l) ? std::log(get_x(p)) : l;
+    };
+    for (std::size_t i = 1; i < points.size(); ++i) {
+        const double x1 = get_x(points[i]);
+        if (x <= x1) {
+            const double l0 = ln_of(points[i - 1]);
+            const double l1 = ln_of(points[i]);
+            const double lx = std::isnan(ln_x) ? std::log(x) : ln_x;
+            const double y0 = get_y(points[i - 1]);
+            const double y1 = get_y(points[i]);
+            const double t = (lx - l0) / (l1 - l0);
+            return {y0 + t * (y1 - y0), false};
+        }
+    }
+    return {get_y(points.back()), true};
+}
+
+inline constexpr auto gain_x = [](const GainPoint& p) { return p.ic_a; };
+inline constexpr auto gain_ln = [](const GainPoint& p) { return p.ln_ic; };
+inline constexpr auto sat_x = [](const SaturationPoint& p) { return p.ic_a; };
+inline constexpr auto sat_ln = [](const SaturationPoint& p) { return p.ln_ic; };
+inline constexpr auto sat_y = [](const SaturationPoint& p) { return p.v_max; };
+inline constexpr auto fwd_x = [](const ForwardPoint& p) { return p.if_a; };
+inline constexpr auto fwd_ln = [](const ForwardPoint& p) { return p.ln_if; };
+inline constexpr auto fwd_y = [](const ForwardPoint& p) { return p.vf_max_v; };
+
+inline Lookup hfe_min_at(const Bipolar& part, double ic_a, double ln_ic) {
+    return interpolate_log(part.hfe_min, ic_a, ln_ic, gain_x, gain_ln, [](const GainPoint& p) { return p.hfe_min; });
+}
+
+inline Lookup hfe_typ_at(const Bipolar& part, double ic_a, double ln_ic) {
+    return interpolate_log(part.hfe_min, ic_a, ln_ic, gain_x, gain_ln,
+                           [](const GainPoint& p) { return p.hfe_typ.value_or(p.hfe_min); });
+}
+
+inline Lookup vce_sat_at(const Bipolar& part, double ic_a, double ln_ic) {
+    return interpolate_log(part.vce_sat, ic_a, ln_ic, sat_x, sat_ln, sat_y);
+}
+
+inline Lookup vbe_sat_at(const Bipolar& part, double ic_a, double ln_ic) {
+    return interpolate_log(part.vbe_sat, ic_a, ln_ic, sat_x, sat_ln, sat_y);
+}
+
+inline Lookup vf_max_at(const Diode& part, double if_a, double ln_if) {
+    return interpolate_log(part.vf, if_a, ln_if, fwd_x, fwd_ln, fwd_y);
+}
+
+inline double vce_sat_test_ratio(const Bipolar& part, double ic_a, double ln_ic) {
+    if (part.vce_sat.empty()) return 10.0;
+    if (part.vce_sat.size() == 1 || !(ic_a > 0)) {
+        const SaturationPoint& p = part.vce_sat.front();
+        return p.ic_a / p.ib_a;
+    }
+    // Nearest on a log scale: the point with the least |ln(Ic_point) - ln(Ic)|; the first wins a tie.
+    const double lx = std::isnan(ln_ic) ? std::log(ic_a) : ln_ic;
+    const SaturationPoint* nearest = nullptr;
+    double best = 0;
+    for (const SaturationPoint& p : part.vce_sat) {
+        const double d = std::abs((std::isnan(p.ln_ic) ? std::log(p.ic_a) : p.ln_ic) - lx);
+        if (nearest == nullptr || d < best) {
+            nearest = &p;
+            best = d;
+        }
+    }
+    return nearest->ic_a / nearest->ib_a;
+}
+
+}  // namespace coilfit::curves
