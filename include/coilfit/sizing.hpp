@@ -139,11 +139,12 @@ struct Prepared {
 };
 [[nodiscard]] Prepared prepare(const Spec& spec);
 
-// What evaluate() works out: every figure, or only what the checks need (Monte Carlo reads
-// verdicts alone). With `checks` the checks are the same; figures no check uses (the base
-// resistor window, the gain needed, the lowest coil current, stored energy, and the release
-// time, charge and clamp energy where no check reads them) are left at zero.
-enum class Figures : std::uint8_t { all, checks };
+// What evaluate() works out: every figure, or only what the checks' verdicts need (Monte Carlo
+// reads verdicts alone). With `verdicts` every verdict is the same as with `all`; figures no
+// check uses (the base resistor window, the gain needed, the lowest coil current, stored energy,
+// release time, charge and clamp energy where no check reads them) are left at zero, and the
+// rate checks may be decided on an upper bound of the clamp charge, their values then that bound.
+enum class Figures : std::uint8_t { all, verdicts };
 
 // Evaluates the design with base resistor rb_ohm (0: no resistor could be chosen) over the
 // given conditions. Pure, allocation-free, fast (Monte Carlo calls it millions of times).

@@ -115,6 +115,50 @@ bool Evaluation::passes() const {
                         [](const CheckValue& c) { return c.verdict == Verdict::fail; });
 }
 
+namespace {
+
+// The checks that grow with the switching rate: the diode's average current (from the charge at
+// the timing corner, `slow`) and the clamp's power (from the charge and heat at the energy
+// corner, `hot`, whose clamp voltage is vc_energy). diode_peak is the diode's peak-current check,
+// kept when it is the tighter of the two. True when both rate checks pass.
+bool set_rate_checks(Evaluation& e, const Prepared& p, const Conditions& c, const CheckValue& diode_peak,
+                     const Decay& slow, const Decay& hot, double vc_energy) {
+    const Spec& spec = *p.spec;
+    const Policy& policy = spec.policy;
+    auto set = [&e](CheckId id, CheckValue v) { e.checks[static_cast<std::size_t>(id)] = v; };
+    const double f = *spec.switching_frequency_hz;
+    e.has_rate = true;
+    e.clamp_power_w = f * clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
+    e.diode_average_current_a = f * slow.charge_c;  // most charge at the lowest clamp voltage
+    const Diode& d = *spec.clamp.diode;
+    // The diode's average-current rating also bounds the repetitive clamp current.
+    const CheckValue avg = at_most(e.diode_average_current_a, d.if_avg_a);
+    set(CheckId::diode_current, avg.margin() < diode_peak.margin() ? avg : diode_peak);
+    CheckValue power;
+    switch (spec.clamp.type) {
+    case ClampType::diode_zener:
+        e.zener_power_w = f * c.vz_hi_v * hot.charge_c;
+        power = at_most(e.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w);
+        break;
+    case ClampType::diode_resistor:
+        e.clamp_resistor_power_w = f * e.clamp.series_ohm * hot.i2_integral;
+        // The clamp resistor's rating is not in the spec; hold it to the base resistor's
+        // policy against a 0.25 W part (common practice for a through-hole resistor).
+        power = at_most(e.clamp_resistor_power_w, policy.power_derating * 0.25);
+        break;
+    case ClampType::diode:
+        // A diode has no power rating of its own here: its dissipation at the rated average
+        // current, if_avg * Vf(if_avg), stands for it.
+        power = at_most(e.clamp_power_w, p.diode_rated_power_w);
+        break;
+    case ClampType::none: return true;
+    }
+    set(CheckId::clamp_power, power);
+    return avg.verdict == Verdict::pass && power.verdict == Verdict::pass;
+}
+
+}  // namespace
+
 Prepared prepare(const Spec& spec) {
     Prepared p;
     p.spec = &spec;
@@ -257,63 +301,45 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
 
     // Stored energy 1/2 L I0^2; without a clamp all of it goes into the transistor at turn-off.
     if (coil.inductance_h && all) e.stored_energy_j = stored_energy(*coil.inductance_h, i0);
-    // With `checks`, the decays are worked out only for the checks that read them.
     const bool release_checked = coil.max_release_time_s.has_value();
     const bool rate_checked = spec.switching_frequency_hz.has_value();
     if (coil.inductance_h && e.clamp.limited && (all || release_checked || rate_checked)) {
         const double l = *coil.inductance_h;
         e.has_timing = true;
         // Timing corner: cold coil (longest tau, highest I0) and the lowest clamp voltage.
-        // A release current of I0 spares the release log where no one reads the release time.
-        const double r_loop = e.r_coil_cold_ohm + e.clamp.series_ohm;
-        const double i_release = all || release_checked ? e.release_current_a : i0;
-        const Decay slow = clamp_math::decay(l, r_loop, e.clamp.timing_v, i0, i_release);
-        e.release_time_s = slow.release_time_s;
-        e.current_zero_time_s = slow.end_time_s;
-        e.clamp_charge_c = slow.charge_c;
         // Energy corner: the highest clamp voltage takes the largest share of the stored energy.
-        // Only its charge and heat are used, never its release time.
-        Decay hot;
-        if (all || rate_checked) {
-            const double vc_energy = spec.clamp.type == ClampType::diode_resistor
-                                         ? e.clamp.peak_v - i0 * e.clamp.series_ohm
-                                         : e.clamp.peak_v;
-            hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
-            e.clamp_energy_j = clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
+        const double r_loop = e.r_coil_cold_ohm + e.clamp.series_ohm;
+        const double vc_energy = spec.clamp.type == ClampType::diode_resistor
+                                     ? e.clamp.peak_v - i0 * e.clamp.series_ohm
+                                     : e.clamp.peak_v;
+        const CheckValue diode_peak = e.check(CheckId::diode_current);
+        // Verdicts only, no release check and no series resistor: the charge through the clamp
+        // is at most tau*I0 (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the
+        // rate checks grow with it, so where they pass at that bound they pass, and the decays'
+        // logarithms are spared. Otherwise (and always for every figure) the decays are worked out.
+        bool exact = true;
+        if (!all && !release_checked && rate_checked && e.clamp.series_ohm == 0) {
+            Decay bound;
+            bound.tau_s = l / r_loop;
+            bound.charge_c = bound.tau_s * i0;
+            exact = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy);
+        }
+        if (exact) {
+            // A release current of I0 spares the release log where no one reads the release time.
+            const double i_release = all || release_checked ? e.release_current_a : i0;
+            const Decay slow = clamp_math::decay(l, r_loop, e.clamp.timing_v, i0, i_release);
+            e.release_time_s = slow.release_time_s;
+            e.current_zero_time_s = slow.end_time_s;
+            e.clamp_charge_c = slow.charge_c;
+            // Only the energy corner's charge and heat are used, never its release time.
+            Decay hot;
+            if (all || rate_checked) {
+                hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
+                e.clamp_energy_j = clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
+            }
+            if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy);
         }
         if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));
-        if (spec.switching_frequency_hz) {
-            const double f = *spec.switching_frequency_hz;
-            e.has_rate = true;
-            e.clamp_power_w = f * e.clamp_energy_j;
-            e.diode_average_current_a = f * slow.charge_c;  // most charge at the lowest clamp voltage
-            const Diode& d = *spec.clamp.diode;
-            // The diode's average-current rating also bounds the repetitive clamp current.
-            CheckValue avg = at_most(e.diode_average_current_a, d.if_avg_a);
-            if (avg.margin() < e.check(CheckId::diode_current).margin()) set(CheckId::diode_current, avg);
-            switch (spec.clamp.type) {
-            case ClampType::diode_zener: {
-                const double vz_hi = c.vz_hi_v;
-                e.zener_power_w = f * vz_hi * hot.charge_c;
-                set(CheckId::clamp_power, at_most(e.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w));
-                break;
-            }
-            case ClampType::diode_resistor: {
-                e.clamp_resistor_power_w = f * e.clamp.series_ohm * hot.i2_integral;
-                // The clamp resistor's rating is not in the spec; hold it to the base resistor's
-                // policy against a 0.25 W part (common practice for a through-hole resistor).
-                set(CheckId::clamp_power, at_most(e.clamp_resistor_power_w, policy.power_derating * 0.25));
-                break;
-            }
-            case ClampType::diode: {
-                // A diode has no power rating of its own here: its dissipation at the rated
-                // average current, if_avg * Vf(if_avg), stands for it.
-                set(CheckId::clamp_power, at_most(e.clamp_power_w, p.diode_rated_power_w));
-                break;
-            }
-            case ClampType::none: break;
-            }
-        }
     }
     return e;
 }

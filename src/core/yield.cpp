@@ -18,6 +18,9 @@ constexpr double phi_minus_3 = 0.0013498980316300946;
 // Samples per unit of work handed to a thread; also the progress granularity.
 constexpr std::uint64_t chunk_samples = 1U << 16;
 
+// Samples drawn together before they are evaluated (see count_samples).
+constexpr std::size_t draw_block = 64;
+
 // Each stream (one per input) is a SplitMix64 sequence of its own, seeded by hashing the user's
 // seed with the stream number; sample i takes the (i+1)-th output of its stream.
 std::uint64_t stream_key(std::uint64_t seed, std::uint64_t stream) {
@@ -148,25 +151,33 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
     varies[static_cast<std::size_t>(YieldInput::gain)] =
         std::any_of(gain_points.begin(), gain_points.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
     YieldCounts counts;
-    for (std::uint64_t i = first; i < last; ++i) {
-        BandPositions t{};
+    // Samples go a block at a time, input by input: the draws of a block are independent
+    // chains the processor overlaps. The positions are those of sample_positions().
+    std::array<BandPositions, draw_block> block{};  // inputs that do not vary stay at 0
+    for (std::uint64_t start = first; start < last; start += draw_block) {
+        const auto n = static_cast<std::size_t>(std::min<std::uint64_t>(draw_block, last - start));
         for (std::size_t s = 0; s < yield_input_count; ++s) {
             if (!varies[s]) continue;
-            t[s] = position_of(static_cast<YieldInput>(s), unit_uniform(stream_bits(keys[s], i)), settings.distribution);
-        }
-        const Evaluation e = evaluate(prepared, conditions_at(box, t), rb_ohm, Figures::checks);
-        bool pass = true;
-        for (std::size_t k = 0; k < check_count; ++k) {
-            const Verdict v = e.checks[k].verdict;
-            if (v == Verdict::skip) continue;
-            ++counts.evaluated[k];
-            if (v == Verdict::fail) {
-                ++counts.failed[k];
-                pass = false;
+            const auto input = static_cast<YieldInput>(s);
+            for (std::size_t j = 0; j < n; ++j) {
+                block[j][s] = position_of(input, unit_uniform(stream_bits(keys[s], start + j)), settings.distribution);
             }
         }
-        ++counts.samples;
-        if (pass) ++counts.passed;
+        for (std::size_t j = 0; j < n; ++j) {
+            const Evaluation e = evaluate(prepared, conditions_at(box, block[j]), rb_ohm, Figures::verdicts);
+            bool pass = true;
+            for (std::size_t k = 0; k < check_count; ++k) {
+                const Verdict v = e.checks[k].verdict;
+                if (v == Verdict::skip) continue;
+                ++counts.evaluated[k];
+                if (v == Verdict::fail) {
+                    ++counts.failed[k];
+                    pass = false;
+                }
+            }
+            ++counts.samples;
+            if (pass) ++counts.passed;
+        }
     }
     return counts;
 }
