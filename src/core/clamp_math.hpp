@@ -40,7 +40,8 @@ inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, double vz_lo_
     return out;
 }
 
-inline Decay decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_release_a) {
+// With charge false only tau and the release time are worked out (one logarithm fewer).
+inline Decay decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_release_a, bool charge = true) {
     Decay d;
     if (!(l_h > 0) || !(r_ohm > 0) || !(i0_a > 0)) return d;
     d.tau_s = l_h / r_ohm;
@@ -49,6 +50,7 @@ inline Decay decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_
     if (i0_a > i_release_a && i_release_a + a > 0) {
         d.release_time_s = d.tau_s * std::log(big_a / (i_release_a + a));
     }
+    if (!charge) return d;
     if (a > 0) {
         d.end_time_s = d.tau_s * std::log1p(i0_a / a);
         d.charge_c = d.tau_s * i0_a - a * d.end_time_s;

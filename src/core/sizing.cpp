@@ -313,31 +313,31 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
                                      ? e.clamp.peak_v - i0 * e.clamp.series_ohm
                                      : e.clamp.peak_v;
         const CheckValue diode_peak = e.check(CheckId::diode_current);
-        // Verdicts only, no release check and no series resistor: the charge through the clamp
-        // is at most tau*I0 (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the
-        // rate checks grow with it, so where they pass at that bound they pass, and the decays'
-        // logarithms are spared. Otherwise (and always for every figure) the decays are worked out.
-        bool exact = true;
-        if (!all && !release_checked && rate_checked && e.clamp.series_ohm == 0) {
+        // Verdicts only, no series resistor: the charge through the clamp is at most tau*I0
+        // (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the rate checks grow
+        // with it, so where they pass at that bound they pass, and the charge logarithms are
+        // spared. Otherwise (and always for every figure) the decays are worked out.
+        bool exact_rate = all || rate_checked;
+        if (!all && rate_checked && e.clamp.series_ohm == 0) {
             Decay bound;
             bound.tau_s = l / r_loop;
             bound.charge_c = bound.tau_s * i0;
-            exact = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy);
+            exact_rate = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy);
         }
-        if (exact) {
-            // A release current of I0 spares the release log where no one reads the release time.
+        if (exact_rate || release_checked) {
+            // A release current of I0 spares the release log where no one reads the release
+            // time; without exact rate checks the charge (and its log) is not needed either.
             const double i_release = all || release_checked ? e.release_current_a : i0;
-            const Decay slow = clamp_math::decay(l, r_loop, e.clamp.timing_v, i0, i_release);
+            const Decay slow = clamp_math::decay(l, r_loop, e.clamp.timing_v, i0, i_release, exact_rate);
             e.release_time_s = slow.release_time_s;
             e.current_zero_time_s = slow.end_time_s;
             e.clamp_charge_c = slow.charge_c;
-            // Only the energy corner's charge and heat are used, never its release time.
-            Decay hot;
-            if (all || rate_checked) {
-                hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
+            if (exact_rate) {
+                // Only the energy corner's charge and heat are used, never its release time.
+                const Decay hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
                 e.clamp_energy_j = clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
+                if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy);
             }
-            if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy);
         }
         if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));
     }
