@@ -122,7 +122,7 @@ namespace {
 // corner, `hot`, whose clamp voltage is vc_energy). diode_peak is the diode's peak-current check,
 // kept when it is the tighter of the two. True when both rate checks pass.
 bool set_rate_checks(Evaluation& e, const Prepared& p, const Conditions& c, const CheckValue& diode_peak,
-                     const Decay& slow, const Decay& hot, double vc_energy) {
+                     const Decay& slow, const Decay& hot, double vc_energy, Figures figures) {
     const Spec& spec = *p.spec;
     const Policy& policy = spec.policy;
     auto set = [&e](CheckId id, CheckValue v) { e.checks[static_cast<std::size_t>(id)] = v; };
@@ -133,7 +133,10 @@ bool set_rate_checks(Evaluation& e, const Prepared& p, const Conditions& c, cons
     const Diode& d = *spec.clamp.diode;
     // The diode's average-current rating also bounds the repetitive clamp current.
     const CheckValue avg = at_most(e.diode_average_current_a, d.if_avg_a);
-    set(CheckId::diode_current, avg.margin() < diode_peak.margin() ? avg : diode_peak);
+    // The tighter of the two stands; for verdicts alone, the failing one (no margins needed).
+    const bool avg_stands = figures == Figures::all ? avg.margin() < diode_peak.margin()
+                                                    : avg.verdict == Verdict::fail;
+    set(CheckId::diode_current, avg_stands ? avg : diode_peak);
     CheckValue power;
     switch (spec.clamp.type) {
     case ClampType::diode_zener:
@@ -322,7 +325,7 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
             Decay bound;
             bound.tau_s = l / r_loop;
             bound.charge_c = bound.tau_s * i0;
-            exact_rate = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy);
+            exact_rate = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy, figures);
         }
         if (exact_rate || release_checked) {
             // A release current of I0 spares the release log where no one reads the release
@@ -336,7 +339,7 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
                 // Only the energy corner's charge and heat are used, never its release time.
                 const Decay hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
                 e.clamp_energy_j = clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
-                if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy);
+                if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy, figures);
             }
         }
         if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));

@@ -31,42 +31,7 @@ std::uint64_t stream_bits(std::uint64_t key, std::uint64_t sample) {
     return splitmix64_mix(key + golden_gamma * (sample + 1));
 }
 
-double position_of(YieldInput input, double u, Distribution distribution) {
-    if (distribution == Distribution::uniform) return u;
-    const double z = truncated_normal_3sigma(u);
-    if (input == YieldInput::gain) {
-        // Normal about the typical gain (position 1) with the minimum at -3 sigma; above typical
-        // the gain is taken at typical.
-        return z >= 0 ? 1.0 : 1.0 + z / 3.0;
-    }
-    // Centred on the band, half-width at 3 sigma: -3 -> 0, +3 -> 1.
-    return std::clamp(0.5 + z / 6.0, 0.0, 1.0);
-}
-
-double at(double lo, double hi, double position) { return lo + (hi - lo) * position; }
-
-}  // namespace
-
-std::string_view distribution_name(Distribution d) { return d == Distribution::normal ? "normal" : "uniform"; }
-
-std::string_view yield_input_name(YieldInput input) {
-    switch (input) {
-    case YieldInput::supply: return "supply.voltage";
-    case YieldInput::ambient: return "ambient";
-    case YieldInput::pin_vdd: return "pin.vdd";
-    case YieldInput::coil_resistance: return "coil.resistance";
-    case YieldInput::base_resistor: return "base_resistor.tolerance";
-    case YieldInput::zener: return "clamp.zener";
-    case YieldInput::gain: return "transistor.hfe";
-    }
-    return "supply.voltage";
-}
-
-std::uint64_t random_bits(std::uint64_t seed, std::uint64_t sample, std::uint64_t stream) {
-    return stream_bits(stream_key(seed, stream), sample);
-}
-
-double normal_quantile(double p) {
+inline double acklam_quantile(double p) {
     // Acklam, P. J. (2003), "An algorithm for computing the inverse normal cumulative
     // distribution function": rational approximations in a central region and two tails.
     // Coefficients from memory; the tests check the round trip against std::erfc.
@@ -93,12 +58,51 @@ double normal_quantile(double p) {
            (((((b[0] * r + b[1]) * r + b[2]) * r + b[3]) * r + b[4]) * r + 1.0);
 }
 
-double truncated_normal_3sigma(double u) {
+inline double truncated_z(double u) {
     // Inversion restricted to [Phi(-3), Phi(3)]; the clamp keeps the approximation's last bits
     // from stepping outside the band.
     const double p = phi_minus_3 + u * (1.0 - 2.0 * phi_minus_3);
-    return std::clamp(normal_quantile(p), -3.0, 3.0);
+    return std::clamp(acklam_quantile(p), -3.0, 3.0);
 }
+
+inline double position_of(YieldInput input, double u, Distribution distribution) {
+    if (distribution == Distribution::uniform) return u;
+    const double z = truncated_z(u);
+    if (input == YieldInput::gain) {
+        // Normal about the typical gain (position 1) with the minimum at -3 sigma; above typical
+        // the gain is taken at typical.
+        return z >= 0 ? 1.0 : 1.0 + z * (1.0 / 3.0);
+    }
+    // Centred on the band, half-width at 3 sigma: -3 -> 0, +3 -> 1.
+    return std::clamp(0.5 + z * (1.0 / 6.0), 0.0, 1.0);
+}
+
+double at(double lo, double hi, double position) { return lo + (hi - lo) * position; }
+
+}  // namespace
+
+std::string_view distribution_name(Distribution d) { return d == Distribution::normal ? "normal" : "uniform"; }
+
+std::string_view yield_input_name(YieldInput input) {
+    switch (input) {
+    case YieldInput::supply: return "supply.voltage";
+    case YieldInput::ambient: return "ambient";
+    case YieldInput::pin_vdd: return "pin.vdd";
+    case YieldInput::coil_resistance: return "coil.resistance";
+    case YieldInput::base_resistor: return "base_resistor.tolerance";
+    case YieldInput::zener: return "clamp.zener";
+    case YieldInput::gain: return "transistor.hfe";
+    }
+    return "supply.voltage";
+}
+
+std::uint64_t random_bits(std::uint64_t seed, std::uint64_t sample, std::uint64_t stream) {
+    return stream_bits(stream_key(seed, stream), sample);
+}
+
+double normal_quantile(double p) { return acklam_quantile(p); }
+
+double truncated_normal_3sigma(double u) { return truncated_z(u); }
 
 Conditions conditions_at(const Conditions& box, const BandPositions& t) {
     auto pos = [&t](YieldInput input) { return t[static_cast<std::size_t>(input)]; };
