@@ -94,7 +94,7 @@ struct YieldCounts {
 // band is one point (and the gain of a part without typical values) are not drawn: their
 // position has no effect, and each input has a stream of its own.
 // The prepared spec is evaluated as given (run_yield prepares one with precompute_logs()).
-[[nodiscard]] YieldCounts count_samples(const Prepared& design, const Conditions& box, double rb_ohm,
+[[nodiscard]] YieldCounts count_samples(const Prepared& prepared, const Conditions& box, double rb_ohm,
                                         const YieldSettings& settings, std::uint64_t first, std::uint64_t last);
 
 // A 95 % (or other) two-sided confidence interval for a proportion.
