@@ -91,4 +91,32 @@ TEST_SUITE("pick") {
         REQUIRE_FALSE(result.reasons.empty());
         for (const auto& r : result.reasons) CHECK(r.rfind("every ", 0) == 0);
     }
+
+    TEST_CASE("a pin below Vbe(sat) is named as the reason, and a Darlington is not offered for it") {
+        Setup s = load("greenhouse-valve.json");
+        s.spec.pin.vdd_v = 0.7;  // 0.665 V at its low tolerance: under every Vbe(sat) of the table
+        s.spec.pin.voh_v.reset();
+        s.spec.pin.voh_current_a.reset();
+        const PickResult result = pick(s.spec, s.table.catalogue);
+        REQUIRE_FALSE(result.reasons.empty());
+        for (const auto& r : result.reasons) {
+            CAPTURE(r);
+            CHECK(r.find("does not reach their Vbe(sat)") != std::string::npos);
+            CHECK(r.find("Darlington") == std::string::npos);
+        }
+    }
+
+    TEST_CASE("the Darlington family's reason does not suggest a Darlington") {
+        Setup s = load("garage-door.json");
+        s.spec.pin.max_current_a = 0.00002;  // a 20 uA pin: too little even for a Darlington
+        const PickResult result = pick(s.spec, s.table.catalogue);
+        bool seen = false;
+        for (const auto& r : result.reasons) {
+            if (r.rfind("every darlington part: ", 0) != 0) continue;
+            seen = true;
+            CAPTURE(r);
+            CHECK(r.find("Darlington") == std::string::npos);
+        }
+        CHECK(seen);
+    }
 }

@@ -9,17 +9,26 @@
 namespace coilfit {
 namespace {
 
-std::string reason_for(std::string_view check, const Evaluation& e, const Spec& spec) {
+std::string reason_for(std::string_view check, const Evaluation& e, const Spec& spec, std::string_view family) {
     const std::string at = " at " + format_quantity(e.coil_current_max_a, Unit::ampere);
     if (check == "pin.current" || check == "transistor.saturation") {
+        // A pin whose lowest VDD does not reach Vbe(sat) drives no base current through any
+        // resistor; a Darlington, whose Vbe(sat) is higher still, would not help.
+        const double vdd_lo = spec.pin.vdd_v * (1.0 - spec.pin.vdd_tolerance);
+        if (vdd_lo <= e.vbe_sat_v) {
+            return "the pin's lowest VDD of " + format_quantity(vdd_lo, Unit::volt) + " does not reach their Vbe(sat) of " +
+                   format_quantity(e.vbe_sat_v, Unit::volt) +
+                   ", so no base resistor can drive them; a higher pin voltage or a level-shifting stage would";
+        }
         if (e.forced_gain_policy * spec.policy.overdrive <= e.hfe) {
             return "the pin can't supply the base current that forced gain " +
                    format_quantity(e.forced_gain_policy, Unit::number) + " asks for (" +
-                   format_quantity(e.base_current_required_a, Unit::ampere) +
-                   "); a Darlington would, or a pin or buffer that can source it";
+                   format_quantity(e.base_current_required_a, Unit::ampere) + "); " +
+                   (family == "darlington" ? "a pin or buffer that can source it would"
+                                           : "a Darlington would, or a pin or buffer that can source it");
         }
-        return "the pin can't supply the base current; a Darlington or a part with hFE min of at least " +
-               format_quantity(e.hfe_needed, Unit::number) + at + " would";
+        return "the pin can't supply the base current; " + (family == "darlington" ? std::string() : "a Darlington or ") +
+               "a part with hFE min of at least " + format_quantity(e.hfe_needed, Unit::number) + at + " would";
     }
     if (check == "transistor.current") {
         return "the coil current" + at + " is above " + format_quantity(spec.policy.current_derating, Unit::ratio) +
@@ -126,7 +135,7 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
             const auto most = std::max_element(counts.begin(), counts.end(),
                                                [](const auto& a, const auto& b) { return a.second < b.second; });
             const Evaluation& e = family_eval.at(family + "|" + most->first);
-            result.reasons.push_back("every " + family + " part: " + reason_for(most->first, e, spec));
+            result.reasons.push_back("every " + family + " part: " + reason_for(most->first, e, spec, family));
         }
     }
     return result;
