@@ -119,16 +119,16 @@ namespace {
 
 // The checks that grow with the switching rate: the diode's average current (from the charge at
 // the timing corner, `slow`) and the clamp's power (from the charge and heat at the energy
-// corner, `hot`, whose clamp voltage is vc_energy). diode_peak is the diode's peak-current check,
-// kept when it is the tighter of the two. True when both rate checks pass.
+// corner, `hot`, and the clamp energy per turn-off worked out from it). diode_peak is the diode's
+// peak-current check, kept when it is the tighter of the two. True when both rate checks pass.
 bool set_rate_checks(Evaluation& e, const Prepared& p, const Conditions& c, const CheckValue& diode_peak,
-                     const Decay& slow, const Decay& hot, double vc_energy, Figures figures) {
+                     const Decay& slow, const Decay& hot, double clamp_energy_j, Figures figures) {
     const Spec& spec = *p.spec;
     const Policy& policy = spec.policy;
     auto set = [&e](CheckId id, CheckValue v) { e.checks[static_cast<std::size_t>(id)] = v; };
     const double f = *spec.switching_frequency_hz;
     e.has_rate = true;
-    e.clamp_power_w = f * clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
+    e.clamp_power_w = f * clamp_energy_j;
     e.diode_average_current_a = f * slow.charge_c;  // most charge at the lowest clamp voltage
     const Diode& d = *spec.clamp.diode;
     // The diode's average-current rating also bounds the repetitive clamp current.
@@ -325,7 +325,8 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
             Decay bound;
             bound.tau_s = l / r_loop;
             bound.charge_c = bound.tau_s * i0;
-            exact_rate = !set_rate_checks(e, p, c, diode_peak, bound, bound, vc_energy, figures);
+            const double bound_energy = clamp_math::energy(bound, vc_energy, e.clamp.series_ohm);
+            exact_rate = !set_rate_checks(e, p, c, diode_peak, bound, bound, bound_energy, figures);
         }
         if (exact_rate || release_checked) {
             // A release current of I0 spares the release log where no one reads the release
@@ -339,7 +340,7 @@ Evaluation evaluate(const Prepared& p, const Conditions& c, double rb_ohm, Figur
                 // Only the energy corner's charge and heat are used, never its release time.
                 const Decay hot = clamp_math::decay(l, r_loop, vc_energy, i0, i0);
                 e.clamp_energy_j = clamp_math::energy(hot, vc_energy, e.clamp.series_ohm);
-                if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, vc_energy, figures);
+                if (rate_checked) set_rate_checks(e, p, c, diode_peak, slow, hot, e.clamp_energy_j, figures);
             }
         }
         if (coil.max_release_time_s) set(CheckId::release_time, at_most(e.release_time_s, *coil.max_release_time_s));
