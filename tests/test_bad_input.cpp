@@ -9,6 +9,8 @@
 // out as failed checks with an explanation (exit 1), never as an exception.
 #include <doctest/doctest.h>
 
+#include "coilfit/report.hpp"
+
 #include <cmath>
 #include <string>
 #include <vector>
@@ -17,6 +19,7 @@
 #include "io/parts_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
+#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -164,11 +167,12 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: schema: expected "coilfit.spec/1" (the schema this coilfit reads), got "coilfit.spec/2")"},
         {S, spec_with("schema", 1), 2, R"(spec.json: schema: expected "coilfit.spec/1" (the schema this coilfit reads), got 1)"},
         {S, spec_with("suply", io::Json::object()), 2,
-         "spec.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, load, name, pin, policy, "
+         "spec.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, "
          "pulldown, schema, supply, switching, transistor)"},
         {S, spec_with("coil.resistence", "400R"), 2,
-         "spec.json: coil.resistence: unknown key (expected one of: inductance, max_release_time, max_voltage, must_operate, "
-         "must_release, preset, rated_voltage, reference_temp, resistance, self_heating, tolerance)"},
+         "spec.json: coil.resistence: unknown key (expected one of: inductance, max_release_time, max_temperature, max_voltage, must_operate, "
+         "must_operate_temp, must_release, preset, rated_voltage, reference_temp, resistance, self_heating, "
+         "thermal_resistance, tolerance)"},
         {S, spec_without("supply"), 2,
          R"(spec.json: supply: missing; expected an object such as { "voltage": "12V", "tolerance": "10%" })"},
         {S, spec_without("coil"), 2,
@@ -242,7 +246,7 @@ std::vector<BadInput> spec_rows() {
          "spec.json: transistor.hfe_min[0].min: expected a number from 1 to 1000000, got 0.5"},
         // Clamp.
         {S, spec_with("clamp.type", "zener"), 2,
-         R"(spec.json: clamp.type: expected "diode", "diode_zener", "diode_resistor" or "none", got "zener")"},
+         R"(spec.json: clamp.type: expected "diode", "diode_zener", "diode_resistor", "diode_tvs" or "none", got "zener")"},
         {S, spec_with("clamp.type", "diode_zener"), 2,
          "spec.json: clamp.zener: missing; a diode_zener clamp needs a zener id or an inline zener record"},
         {S, spec_with("clamp.zener", "1N4742A"), 2, R"(spec.json: clamp.zener: given, but clamp.type is "diode"; use "diode_zener")"},
@@ -295,11 +299,11 @@ std::vector<BadInput> parts_rows() {
         {P, "{}", 2, "parts/test.json: expected a JSON list [ ... ] of part records, got an object"},
         {P, "[1]", 2, "parts/test.json: [0]: expected a JSON object { ... }, got 1"},
         {P, table_of(with(good_npn, "kind", nullptr)), 2,
-         "parts/test.json: [0].kind: missing; expected npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin"},
+         "parts/test.json: [0].kind: missing; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
         {P, table_of(with(good_npn, "kind", "triode")), 2,
-         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin"},
+         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
         {P, table_of(with(good_npn, "kind", 3)), 2,
-         "parts/test.json: [0].kind: expected npn, darlington, rectifier, fast, signal, schottky, zener, coil or pin, got 3"},
+         "parts/test.json: [0].kind: expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin, got 3"},
         {P, table_of(with(good_npn, "id", "")), 2, R"(parts/test.json: [0].id: expected an id such as "2N4401", got an empty text)"},
         {P, table_of(with(good_npn, "id", " QT1")), 2, R"(parts/test.json: [0].id: expected an id without spaces at either end, got " QT1")"},
         {P, table_of(with(good_npn, "id", "Q\x07")), 2, R"(parts/test.json: [0].id: expected a text without control characters, got "Q\x07")"},
@@ -320,8 +324,8 @@ std::vector<BadInput> parts_rows() {
         {P, npn_with("tj_max", "400C"), 2, "parts/test.json: [0].tj_max: expected a temperature from 50.0 °C to 250.0 °C, got 400.0 °C"},
         {P, npn_with("source", nullptr), 2, "parts/test.json: [0].source: missing; every record says where its values come from"},
         {P, npn_with("pdd", "1W"), 2,
-         "parts/test.json: [0].pdd: unknown key (expected one of: description, hfe_min, ic_max, id, kind, package, pd, rth_ja, "
-         "source, tj_max, vbe_sat, vce_sat, vceo)"},
+         "parts/test.json: [0].pdd: unknown key (expected one of: description, hfe_min, hfe_temp_exponent, ic_max, id, kind, "
+         "package, pd, r_be_internal, rth_ja, source, tj_max, vbe_sat, vce_sat, vceo)"},
         {P, table_of(with(good_diode, "vrrm", "-100V")), 2, "parts/test.json: [0].vrrm: expected a voltage greater than zero, got -100 V"},
         {P, table_of(with(good_diode, "vf", io::Json::parse(R"([{ "if": "10mA", "max": "20V" }])"))), 2,
          "parts/test.json: [0].vf[0].max: expected a voltage from 50 mV to 10 V, got 20 V"},
@@ -329,8 +333,9 @@ std::vector<BadInput> parts_rows() {
         {P, table_of(with(good_zener, "vz", "0.5V")), 2, "parts/test.json: [0].vz: expected a voltage from 1 V to 1 kV, got 500 mV"},
         {P, table_of(with(good_coil, "resistance", "-5R")), 2, "parts/test.json: [0].resistance: expected a resistance greater than zero, got -5 Ω"},
         {P, table_of(with(good_coil, "resistence", "400R")), 2,
-         "parts/test.json: [0].resistence: unknown key (expected one of: inductance, max_release_time, max_voltage, must_operate, "
-         "must_release, preset, rated_voltage, reference_temp, resistance, self_heating, tolerance)"},
+         "parts/test.json: [0].resistence: unknown key (expected one of: inductance, max_release_time, max_temperature, max_voltage, must_operate, "
+         "must_operate_temp, must_release, preset, rated_voltage, reference_temp, resistance, self_heating, "
+         "thermal_resistance, tolerance)"},
         {P, table_of(with(good_coil, "preset", "coil-t")), 2, "parts/test.json: [0].preset: expected no preset inside a preset"},
         {P, table_of(with(good_pin, "voh", "5V")), 2, "parts/test.json: [0].voh: expected at most pin.vdd 3.3 V, got 5 V"},
     };
@@ -344,7 +349,7 @@ std::vector<BadInput> flag_rows() {
         {F, "-3", 2, "--coil-resistance: expected a resistance greater than zero, got -3 Ω", "coil.resistance", "--coil-resistance"},
         {F, "60C", 2, "--ambient-min: expected at most ambient.max 40.0 °C, got 60.0 °C", "ambient.min", "--ambient-min"},
         {F, "E7", 2, R"(--series: expected one of E3, E6, E12, E24, E48, E96, E192, got "E7")", "base_resistor.series", "--series"},
-        {F, "zener", 2, R"(--clamp: expected "diode", "diode_zener", "diode_resistor" or "none", got "zener")", "clamp.type", "--clamp"},
+        {F, "zener", 2, R"(--clamp: expected "diode", "diode_zener", "diode_resistor", "diode_tvs" or "none", got "zener")", "clamp.type", "--clamp"},
         {F, "K2 \x1b[2J", 2, R"(--name: expected a text without control characters, got "K2 \x1b[2J")", "name", "--name"},
         {F, "K2 \xff\xfe", 2, R"(--name: expected UTF-8 text, got "K2 \xff\xfe")", "name", "--name"},
         {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts` lists it", "transistor",
@@ -461,7 +466,7 @@ TEST_SUITE("bad input") {
               "the pin's lowest VDD 475 mV does not reach Vbe(sat) 950 mV: no base resistor and no gain can switch this "
               "transistor on; use a pin with a higher supply or a buffer");
         for (const auto& q : r.quantities) CHECK(std::isfinite(q.value));
-        const std::string text = io::render_text(r, s, io::TextStyle{});
+        const std::string text = io::render_text(r, io::TextStyle{});
         CHECK(text.find("nan") == std::string::npos);
         CHECK(text.find("inf") == std::string::npos);
         CHECK(text.find("n/a") == std::string::npos);

@@ -3,6 +3,8 @@
 // voltages of each option, "none", the missing-inductance note and the trade-off table.
 #include <doctest/doctest.h>
 
+#include "coilfit/report.hpp"
+
 #include <cmath>
 #include <filesystem>
 #include <string>
@@ -12,6 +14,7 @@
 #include "coilfit/sizing.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
+#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -145,27 +148,27 @@ TEST_SUITE("clamp") {
         ClampSpec c;
         c.diode = d;
         c.type = ClampType::diode;  // Vc = Vf(I0) for the peak, the low drop for timing
-        ClampVoltages v = clamp_voltages(c, i0, 11.4, 12.6);
+        ClampVoltages v = test::clamp_voltages_at(c, i0, 11.4, 12.6);
         CHECK(v.limited);
         CHECK(v.peak_v == Approx(vf_max));
         CHECK(v.timing_v == Approx(0.6));
         CHECK(v.series_ohm == 0.0);
         c.type = ClampType::diode_zener;  // Vz_hi + Vf for the peak, Vz_lo + the low drop for timing
         c.zener = z;
-        v = clamp_voltages(c, i0, 11.4, 12.6);
+        v = test::clamp_voltages_at(c, i0, 11.4, 12.6);
         CHECK(v.peak_v == Approx(12.6 + vf_max));
         CHECK(v.timing_v == Approx(11.4 + 0.6));
         c.type = ClampType::diode_resistor;  // I0 Rs + Vf for the peak; Rs joins the loop for timing
         c.zener.reset();
         c.resistor_ohm = 470.0;
-        v = clamp_voltages(c, i0, 0, 0);
+        v = test::clamp_voltages_at(c, i0, 0, 0);
         CHECK(v.peak_v == Approx(i0 * 470.0 + vf_max));
         CHECK(v.timing_v == Approx(0.6));
         CHECK(v.series_ohm == 470.0);
         c.type = ClampType::none;
         c.diode.reset();
         c.resistor_ohm.reset();
-        CHECK_FALSE(clamp_voltages(c, i0, 0, 0).limited);
+        CHECK_FALSE(test::clamp_voltages_at(c, i0, 0, 0).limited);
     }
 
     TEST_CASE("the report's timing uses the cold coil and the zener at its bottom tolerance, the peak its top") {
@@ -176,16 +179,16 @@ TEST_SUITE("clamp") {
         const double i0 = 13.2 / r_cold;
         const double i_rel = 0.1 * 12.0 / 400.0;
         const double vf_max = vf_max_at(*s.clamp.diode, i0).value;
-        CHECK(z.worst.peak_collector_voltage_v == Approx(13.2 + 12.0 * 1.05 + vf_max));
+        CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + 12.0 * 1.05 + vf_max));
         // Closed form (method.md) with Vc = Vz_lo + vf_low, worked here independently.
         const double vc = 12.0 * 0.95 + 0.6;
         const double tau = 0.9 / r_cold;
-        CHECK(z.worst.release_time_s == Approx(tau * std::log((i0 + vc / r_cold) / (i_rel + vc / r_cold))));
+        CHECK(test::flat(z.worst).release_time_s == Approx(tau * std::log((i0 + vc / r_cold) / (i_rel + vc / r_cold))));
         // Zener power: f Vz_hi Q at the highest clamp voltage, where the zener takes the most energy.
         const double vc_hi = 12.0 * 1.05 + vf_max;
         const double q_hi = tau * i0 - vc_hi / r_cold * tau * std::log1p(i0 * r_cold / vc_hi);
-        CHECK(z.worst.zener_power_w == Approx(1.0 * 12.0 * 1.05 * q_hi));
-        CHECK(z.worst.clamp_energy_j == Approx(vc_hi * q_hi));
+        CHECK(test::flat(z.worst).zener_power_w == Approx(1.0 * 12.0 * 1.05 * q_hi));
+        CHECK(test::flat(z.worst).clamp_energy_j == Approx(vc_hi * q_hi));
     }
 
     TEST_CASE("the release time check compares the longest release with coil.max_release_time") {

@@ -1,10 +1,13 @@
 // pick (include/coilfit/pick.hpp): every candidate agrees with sizing it alone; stable ranking.
 #include <doctest/doctest.h>
 
+#include "coilfit/report.hpp"
+
 #include <algorithm>
 
 #include "coilfit/pick.hpp"
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -40,7 +43,7 @@ TEST_SUITE("pick") {
                 alone.clamp.diode = *s.table.catalogue.find_diode(c.diode);
                 const SizingReport r = size(alone, s.table.catalogue);
                 CHECK(r.verdict == c.verdict);
-                CHECK(r.resistor.value_ohm == c.base_resistor_ohm);
+                CHECK(r.resistor.value_ohm == c.resistor_ohm);
                 std::vector<std::string> failed;
                 for (const auto& ch : r.checks) {
                     if (ch.verdict == Verdict::fail) failed.push_back(ch.id);

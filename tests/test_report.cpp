@@ -1,12 +1,15 @@
 // The JSON report against the contract (architecture doc, "JSON report") and the text report.
 #include <doctest/doctest.h>
 
+#include "coilfit/report.hpp"
+
 #include <cmath>
 #include <set>
 
 #include "coilfit/sizing.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
+#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -39,7 +42,7 @@ TEST_SUITE("report") {
     TEST_CASE("the JSON report has the contract's keys in a stable order") {
         const Loaded l = load_example("greenhouse-valve.json");
         const SizingReport r = size(l.spec, l.table.catalogue);
-        const io::Json j = io::report_to_json(r, l.spec);
+        const io::Json j = io::report_to_json(r);
         std::vector<std::string> keys;
         for (const auto& [k, v] : j.items()) keys.push_back(k);
         const std::vector<std::string> contract{"schema", "tool", "verdict", "input", "quantities", "checks", "notes", "cautions"};
@@ -64,7 +67,9 @@ TEST_SUITE("report") {
         for (const auto& c : j["checks"]) {
             std::vector<std::string> ck;
             for (const auto& [k, v] : c.items()) ck.push_back(k);
-            CHECK(ck == std::vector<std::string>{"id", "verdict", "value", "limit", "unit", "margin", "message"});
+            // Edition 2 adds the corner of the value (or, for a skipped check, the reason).
+            const std::string last = c["verdict"] == "skip" ? "reason" : "corner";
+            CHECK(ck == std::vector<std::string>{"id", "verdict", "value", "limit", "unit", "margin", "message", last});
             seen.insert(c["id"].get<std::string>());
             const std::string v = c["verdict"];
             CHECK((v == "pass" || v == "warn" || v == "fail" || v == "skip"));
@@ -86,7 +91,7 @@ TEST_SUITE("report") {
             CAPTURE(name);
             const Loaded l = load_example(name);
             const SizingReport r = size(l.spec, l.table.catalogue);
-            const std::string text = io::render_text(r, l.spec, io::TextStyle{});
+            const std::string text = io::render_text(r, io::TextStyle{});
             CHECK(text.find("Checks") != std::string::npos);
             CHECK(text.find("Cautions") != std::string::npos);
             CHECK(text.find("licensed practice") != std::string::npos);
@@ -94,7 +99,7 @@ TEST_SUITE("report") {
             CHECK(text.find("nan") == std::string::npos);
             CHECK(text.find("inf") == std::string::npos);
             CHECK(text.find("\x1b[") == std::string::npos);  // no colour unless asked
-            check_numbers_finite(io::report_to_json(r, l.spec));
+            check_numbers_finite(io::report_to_json(r));
             if (l.spec.coil.inductance_h) {
                 // Timing and the clamp trade-off table for every example with an inductance.
                 CHECK(r.quantity("release_time_s").has_value());

@@ -5,7 +5,9 @@
 #include <cmath>
 #include <vector>
 
+#include "coilfit/report.hpp"
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 
 using namespace coilfit;
 using doctest::Approx;
@@ -47,7 +49,8 @@ Diode flat_diode() {
 Spec hand_spec() {
     Spec s;
     s.name = "hand-worked";
-    s.supply = {12.0, 0.10};
+    s.supply.voltage_v = 12.0;
+    s.supply.tolerance = 0.10;
     s.ambient = {-20.0, 60.0};
     s.coil.rated_voltage_v = 12.0;
     s.coil.resistance_ohm = 400.0;
@@ -74,16 +77,16 @@ TEST_SUITE("sizing") {
         const Sized z = size_numbers(s);
         // Ohm's law; cold coil: 400 Ω -10 % at -20 °C (IEC 60028 copper, 40 K below 20 °C).
         const double r_cold = 400.0 * 0.9 * (1.0 + alpha * (-20.0 - 20.0));
-        CHECK(z.worst.r_coil_cold_ohm == Approx(r_cold));
-        CHECK(z.worst.coil_current_max_a == Approx(13.2 / r_cold));  // highest supply 12 V +10 %
+        CHECK(test::flat(z.worst).r_coil_cold_ohm == Approx(r_cold));
+        CHECK(test::flat(z.worst).coil_current_max_a == Approx(13.2 / r_cold));  // highest supply 12 V +10 %
         // Hot coil: 400 Ω +10 % at 60 °C.
         const double r_hot = 400.0 * 1.1 * (1.0 + alpha * 40.0);
-        CHECK(z.worst.r_coil_hot_ohm == Approx(r_hot));
-        CHECK(z.worst.coil_current_nominal_a == Approx(12.0 / 400.0));
+        CHECK(test::flat(z.worst).r_coil_hot_ohm == Approx(r_hot));
+        CHECK(test::flat(z.worst).coil_current_nominal_a == Approx(12.0 / 400.0));
         // Lowest coil voltage: 10.8 V less Vce(sat) 0.2 V; must-operate 75 % of 12 V, hot.
-        CHECK(z.worst.coil_voltage_min_v == Approx(10.6));
-        CHECK(z.worst.operate_voltage_hot_v == Approx(9.0 * (1.0 + alpha * 40.0)));
-        CHECK(z.worst.release_current_a == Approx(1.2 / 400.0));
+        CHECK(test::flat(z.worst).coil_voltage_min_v == Approx(10.6));
+        CHECK(test::flat(z.worst).operate_voltage_hot_v == Approx(9.0 * (1.0 + alpha * 40.0)));
+        CHECK(test::flat(z.worst).release_current_a == Approx(1.2 / 400.0));
     }
 
     TEST_CASE("the base resistor is the largest E24 value that saturates at worst case") {
@@ -93,22 +96,22 @@ TEST_SUITE("sizing") {
         const double i_max = 13.2 / r_cold;            // 0.04344 A
         const double ib_req = i_max / 10.0;            // forced gain 10 (hFE 100 / 2 = 50 is looser)
         const double rb_max = (3.3 * 0.95 - 0.9) / ib_req / 1.05;  // VDD low, Vbe(sat), Rb +5 %
-        CHECK(z.worst.base_resistor_max_ohm == Approx(rb_max));
+        CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
         // By hand: rb_max = 2.235 / 0.004344 / 1.05 = 490.0 Ω; the E24 value below is 470 Ω.
         CHECK(rb_max == Approx(490.0).epsilon(0.002));
-        REQUIRE(z.rb_ohm.has_value());
-        CHECK(*z.rb_ohm == Approx(470.0));
+        REQUIRE(z.r_drive_ohm.has_value());
+        CHECK(*z.r_drive_ohm == Approx(470.0));
         // Pin current at the opposite corner: VDD high, Vbe low 0.6 V, Rb -5 %.
         const double i_pin = (3.3 * 1.05 - 0.6) / (470.0 * 0.95);
-        CHECK(z.worst.pin_current_max_a == Approx(i_pin));
+        CHECK(test::flat(z.worst).pin_current_max_a == Approx(i_pin));
         CHECK(z.worst.check(CheckId::pin_current).verdict == Verdict::pass);
         // Lowest base current and the worst forced gain with 470 Ω.
         const double ib_min = (3.3 * 0.95 - 0.9) / (470.0 * 1.05);
-        CHECK(z.worst.base_current_min_a == Approx(ib_min));
-        CHECK(z.worst.forced_gain_worst == Approx(i_max / ib_min));
+        CHECK(test::flat(z.worst).base_current_min_a == Approx(ib_min));
+        CHECK(test::flat(z.worst).forced_gain_worst == Approx(i_max / ib_min));
         CHECK(z.worst.check(CheckId::transistor_saturation).verdict == Verdict::pass);
         // Smallest resistor the pin can carry: (3.465 - 0.6) / (8 mA * 0.95).
-        CHECK(z.worst.base_resistor_min_ohm == Approx((3.465 - 0.6) / (0.008 * 0.95)));
+        CHECK(test::flat(z.worst).base_resistor_min_ohm == Approx((3.465 - 0.6) / (0.008 * 0.95)));
     }
 
     TEST_CASE("the pin's output resistance and the pull-down enter the largest resistor") {
@@ -120,9 +123,9 @@ TEST_SUITE("sizing") {
         const double i_max = 13.2 / (360.0 * (1.0 - alpha * 40.0));
         const double r_out = (3.3 - 2.9) / 0.008;  // Thevenin: (VDD - VOH) / IOH = 50 Ω
         const double rb_max = ((3.135 - 0.9) / (i_max / 10.0 + 0.9 / 47e3) - r_out) / 1.05;
-        CHECK(z.worst.pin_r_out_ohm == Approx(50.0));
-        CHECK(z.worst.base_resistor_max_ohm == Approx(rb_max));
-        CHECK(z.worst.base_current_min_a == Approx((3.135 - 0.9) / (*z.rb_ohm * 1.05 + r_out) - 0.9 / 47e3));
+        CHECK(test::flat(z.worst).pin_r_out_ohm == Approx(50.0));
+        CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
+        CHECK(test::flat(z.worst).base_current_min_a == Approx((3.135 - 0.9) / (*z.r_drive_ohm * 1.05 + r_out) - 0.9 / 47e3));
     }
 
     TEST_CASE("with overdrive 5 the minimum gain a pin can serve is 5 I_coil / I_pin") {
@@ -131,14 +134,15 @@ TEST_SUITE("sizing") {
         Spec s = hand_spec();
         s.policy.overdrive = 5;
         const Sized z = size_numbers(s);
-        CHECK(z.worst.hfe_needed == Approx(5.0 * z.worst.coil_current_max_a / 0.008));
+        CHECK(test::flat(z.worst).hfe_needed == Approx(5.0 * test::flat(z.worst).coil_current_max_a / 0.008));
     }
 
     TEST_CASE("with the pin at the supply and Vbe neglected the base resistor is hFE R_coil / 5") {
         // Common practice, no single source: Rb = hFE * R_coil / 5 when the drive voltage equals
         // the coil supply, Vbe is neglected and the base gets five times the minimum current.
         Spec s = hand_spec();
-        s.supply = {5.0, 0.0};
+        s.supply.voltage_v = 5.0;
+        s.supply.tolerance = 0.0;
         s.ambient = {20.0, 20.0};
         s.coil.tolerance = 0.0;
         s.coil.rated_voltage_v = 5.0;
@@ -151,15 +155,15 @@ TEST_SUITE("sizing") {
         s.policy.forced_gain = 1e4;  // let the overdrive rule bind
         s.transistor = flat_npn(100, 1e-9, 1e-9);
         const Sized z = size_numbers(s);
-        CHECK(z.worst.base_resistor_max_ohm == Approx(100.0 * 70.0 / 5.0).epsilon(1e-6));
-        CHECK(*z.rb_ohm == Approx(1300.0));  // E24 value below 1400 Ω
+        CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(100.0 * 70.0 / 5.0).epsilon(1e-6));
+        CHECK(*z.r_drive_ohm == Approx(1300.0));  // E24 value below 1400 Ω
     }
 
     TEST_CASE("a fixed base resistor is checked, not chosen") {
         Spec s = hand_spec();
         s.base_resistor.value_ohm = 1000.0;
         const Sized z = size_numbers(s);
-        CHECK(*z.rb_ohm == Approx(1000.0));
+        CHECK(*z.r_drive_ohm == Approx(1000.0));
         CHECK(z.worst.check(CheckId::transistor_saturation).verdict == Verdict::fail);
         const SizingReport r = size(s, Catalogue{});
         CHECK(r.resistor.fixed);
@@ -182,7 +186,8 @@ TEST_SUITE("sizing") {
 
     TEST_CASE("a coil that cannot operate at the lowest supply is a failed check, not an error") {
         Spec s = hand_spec();
-        s.supply = {9.0, 0.10};  // 8.1 V low against 9 V * 1.157 hot must-operate
+        s.supply.voltage_v = 9.0;
+        s.supply.tolerance = 0.10;  // 8.1 V low against 9 V * 1.157 hot must-operate
         const SizingReport r = size(s, Catalogue{});
         const Check* op = r.find_check("coil.operate");
         REQUIRE(op != nullptr);
@@ -217,7 +222,7 @@ TEST_SUITE("sizing") {
     TEST_CASE("the diode clamp peak is the supply plus one diode drop") {
         // Common practice: a plain diode holds the collector about one drop above the supply.
         const Sized z = size_numbers(hand_spec());
-        CHECK(z.worst.peak_collector_voltage_v == Approx(13.2 + 1.0));
+        CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + 1.0));
         CHECK(z.worst.check(CheckId::transistor_voltage).limit == Approx(0.75 * 40.0));
     }
 
@@ -233,15 +238,15 @@ TEST_SUITE("sizing") {
                 const Sized a = size_numbers(s);
                 const Sized b = size_numbers(higher);
                 CAPTURE(vs);
-                CHECK(b.worst.coil_current_max_a >= a.worst.coil_current_max_a);
-                CHECK(b.worst.coil_current_min_a >= a.worst.coil_current_min_a);
-                if (a.rb_ohm) {
-                    CHECK(eseries_contains(*a.rb_ohm, series));
-                    CHECK(*a.rb_ohm <= a.worst.base_resistor_max_ohm);
-                    const auto up = eseries_next_up(*a.rb_ohm, series);
-                    if (up) CHECK(*up > a.worst.base_resistor_max_ohm);
+                CHECK(test::flat(b.worst).coil_current_max_a >= test::flat(a.worst).coil_current_max_a);
+                CHECK(test::flat(b.worst).coil_current_min_a >= test::flat(a.worst).coil_current_min_a);
+                if (a.r_drive_ohm) {
+                    CHECK(eseries_contains(*a.r_drive_ohm, series));
+                    CHECK(*a.r_drive_ohm <= test::flat(a.worst).base_resistor_max_ohm);
+                    const auto up = eseries_next_up(*a.r_drive_ohm, series);
+                    if (up) CHECK(*up > test::flat(a.worst).base_resistor_max_ohm);
                     // The chosen value saturates the transistor at worst case.
-                    CHECK(a.worst.forced_gain_worst <= a.worst.beta_target * (1 + 1e-12));
+                    CHECK(test::flat(a.worst).forced_gain_worst <= test::flat(a.worst).beta_target * (1 + 1e-12));
                 }
             }
         }
@@ -286,12 +291,19 @@ TEST_SUITE("sizing") {
         // covers a pass on the bound, a pass on the exact charge only, and a failure.
         for (double f : {1.0, 1000.0, 7000.0, 8000.0, 8500.0, 9000.0, 9500.0, 20000.0}) {
             Spec rated = base;
-            rated.switching_frequency_hz = f;
+            rated.switching.frequency_hz = f;
             rated.pulldown_ohm = 47e3;
             specs.push_back(rated);
             Spec zener = rated;
             zener.clamp.type = ClampType::diode_zener;
-            zener.clamp.zener = Zener{"TEST-Z", 12.0, 0.05, 0.5, 0.02, "", "", "test data"};
+            Zener tz;
+            tz.id = "TEST-Z";
+            tz.vz_v = 12.0;
+            tz.tolerance = 0.05;
+            tz.pd_w = 0.5;
+            tz.izt_a = 0.02;
+            tz.source = "test data";
+            zener.clamp.zener = tz;
             specs.push_back(zener);
             Spec resistor = rated;
             resistor.clamp.type = ClampType::diode_resistor;
@@ -306,15 +318,16 @@ TEST_SUITE("sizing") {
         release_only.coil.max_release_time_s = 0.01;
         specs.push_back(release_only);
         Spec darlington = base;
-        darlington.switching_frequency_hz = 10.0;
-        darlington.transistor.kind = BipolarKind::darlington;
-        darlington.transistor.vce_sat = {{0.01, 0.00001, 0.9}, {0.5, 0.0005, 1.1}};
+        darlington.switching.frequency_hz = 10.0;
+        std::get<Bipolar>(darlington.transistor).kind = BipolarKind::darlington;
+        std::get<Bipolar>(darlington.transistor).vce_sat = {{0.01, 0.00001, 0.9}, {0.5, 0.0005, 1.1}};
         specs.push_back(darlington);
         Spec no_clamp = base;
         no_clamp.clamp.type = ClampType::none;
         no_clamp.clamp.diode.reset();
         specs.push_back(no_clamp);
         int rate_verdicts[2] = {0, 0};  // rate checks seen passing, failing in verdicts mode
+        Evaluation reused;
         for (Spec& spec : specs) {
             precompute_logs(spec);
             const Prepared prepared = prepare(spec);
@@ -331,27 +344,31 @@ TEST_SUITE("sizing") {
                 points.push_back(c);
             }
             for (const Conditions& c : points) {
-                for (double rb : {0.0, sized.rb_ohm.value_or(1000.0), 270.0}) {
+                for (double rb : {0.0, sized.r_drive_ohm.value_or(1000.0), 270.0}) {
                     CAPTURE(clamp_type_name(spec.clamp.type));
-                    CAPTURE(spec.switching_frequency_hz.value_or(0.0));
+                    CAPTURE(spec.switching.frequency_hz.value_or(0.0));
                     CAPTURE(rb);
                     const Evaluation plain = evaluate(spec, c, rb);
                     const Evaluation all = evaluate(prepared, c, rb);
                     const Evaluation verdicts = evaluate(prepared, c, rb, Figures::verdicts);
-                    CHECK(all.release_time_s == plain.release_time_s);
-                    CHECK(all.clamp_energy_j == plain.clamp_energy_j);
-                    CHECK(all.clamp_power_w == plain.clamp_power_w);
-                    CHECK(all.base_resistor_max_ohm == plain.base_resistor_max_ohm);
-                    CHECK(all.junction_temp_max_c == plain.junction_temp_max_c);
+                    // Monte Carlo reuses one Evaluation: an earlier evaluation's leftovers must not
+                    // change a verdict.
+                    evaluate_into(prepared, c, rb, Figures::verdicts, reused);
+                    CHECK(test::flat(all).release_time_s == test::flat(plain).release_time_s);
+                    CHECK(test::flat(all).clamp_energy_j == test::flat(plain).clamp_energy_j);
+                    CHECK(test::flat(all).clamp_power_w == test::flat(plain).clamp_power_w);
+                    CHECK(test::flat(all).base_resistor_max_ohm == test::flat(plain).base_resistor_max_ohm);
+                    CHECK(test::flat(all).junction_temp_max_c == test::flat(plain).junction_temp_max_c);
                     for (std::size_t k = 0; k < check_count; ++k) {
                         CAPTURE(check_id_name(static_cast<CheckId>(k)));
-                        const CheckValue& want = plain.checks[k];
-                        CHECK(all.checks[k].verdict == want.verdict);
-                        CHECK(all.checks[k].has_value == want.has_value);
-                        CHECK(all.checks[k].bound == want.bound);
-                        CHECK(all.checks[k].value == want.value);
-                        CHECK(all.checks[k].limit == want.limit);
-                        CHECK(verdicts.checks[k].verdict == want.verdict);
+                        const CheckValue& want = plain.checks.values[k];
+                        CHECK(all.checks.values[k].verdict == want.verdict);
+                        CHECK(all.checks.values[k].has_value == want.has_value);
+                        CHECK(all.checks.values[k].bound == want.bound);
+                        CHECK(all.checks.values[k].value == want.value);
+                        CHECK(all.checks.values[k].limit == want.limit);
+                        CHECK(verdicts.checks.values[k].verdict == want.verdict);
+                        CHECK(reused.checks.values[k].verdict == want.verdict);
                     }
                     if (plain.check(CheckId::clamp_power).verdict != Verdict::skip) {
                         ++rate_verdicts[plain.check(CheckId::clamp_power).verdict == Verdict::fail ? 1 : 0];

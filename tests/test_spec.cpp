@@ -36,7 +36,7 @@ TEST_SUITE("spec") {
         CHECK(s.policy.overdrive == Approx(2.0));
         CHECK(s.policy.current_derating == Approx(0.75));
         CHECK(s.clamp.type == ClampType::diode);
-        CHECK(s.transistor.id == "2N4401");
+        CHECK(origin(s.transistor).id == "2N4401");
         CHECK(s.defaults_used.size() >= 8);
     }
 
@@ -58,8 +58,8 @@ TEST_SUITE("spec") {
             "vbe_sat": [ { "ic": "500mA", "ib": "50mA", "max": "1.1V" } ],
             "pd": "1W", "source": "our own bench measurement" })");
         const Spec s = read(text);
-        CHECK(s.transistor.id == "MY-NPN");
-        CHECK(s.transistor.vceo_v == Approx(60.0));
+        CHECK(origin(s.transistor).id == "MY-NPN");
+        CHECK(std::get<Bipolar>(s.transistor).vceo_v == Approx(60.0));
     }
 
     TEST_CASE("flags override fields and are named in their errors") {
@@ -95,7 +95,7 @@ TEST_SUITE("spec") {
         CHECK_THROWS_WITH_AS(read(typo), "spec.json: coil.resistance: missing; expected a resistance such as \"400R\"", InputError);
         std::string extra = minimal;
         extra.replace(extra.find("\"max_current\""), 13, "\"max_curent\": 1, \"max_current\"");
-        CHECK_THROWS_WITH_AS(read(extra), "spec.json: pin.max_curent: unknown key (expected one of: max_current, preset, vdd, vdd_tolerance, voh, voh_current)", InputError);
+        CHECK_THROWS_WITH_AS(read(extra), "spec.json: pin.max_curent: unknown key (expected one of: max_current, preset, vdd, vdd_tolerance, voh, voh_current, voh_vdd)", InputError);
         std::string unknown = minimal;
         unknown.replace(unknown.find("\"2N4401\""), 8, "\"2N9999\"");
         CHECK_THROWS_AS(read(unknown), InputError);

@@ -8,6 +8,8 @@
 // (release time). ngspice is a CI dependency (.ci/run installs it): without it these tests FAIL.
 #include <doctest/doctest.h>
 
+#include "coilfit/report.hpp"
+
 #include <unistd.h>
 
 #include <cstdio>
@@ -23,6 +25,7 @@
 #include "io/netlist.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
+#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -127,7 +130,7 @@ Compared check_against_ngspice(const Spec& spec, const std::string& tag) {
     REQUIRE_MESSAGE(ngspice_found(), "ngspice not found: install the Debian package ngspice (CI installs it)");
     const SizingReport report = size(spec, table().catalogue);
     const Sized sized = size_numbers(spec);
-    const auto meas = run_ngspice(io::spice_netlist(spec, sized), tag);
+    const auto meas = run_ngspice(io::spice_netlist(report), tag);
     c.supply_high_v = sized.conditions.vs_hi_v;
     c.report_current_a = report.quantity("coil_current_max_a").value_or(0);
     c.report_peak_v = report.quantity("peak_collector_voltage_v").value_or(0);
@@ -185,7 +188,7 @@ TEST_SUITE("spice") {
         for (const auto& entry : fs::directory_iterator(COILFIT_TEST_EXAMPLES_DIR)) {
             if (entry.path().extension() != ".json") continue;
             const Spec spec = io::read_spec(io::load_spec_document(entry.path().string()), table());
-            if (!spec.coil.inductance_h || spec.clamp.type == ClampType::none || !size_numbers(spec).rb_ohm) continue;
+            if (!spec.coil.inductance_h || spec.clamp.type == ClampType::none || !size_numbers(spec).r_drive_ohm) continue;
             INFO(entry.path().string());
             check_against_ngspice(spec, "example-" + entry.path().stem().string());
         }

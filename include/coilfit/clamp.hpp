@@ -1,13 +1,17 @@
-// The flyback clamp across the coil: clamp voltage, peak collector voltage and the RL decay.
+// The clamp stage: the flyback clamp across the coil, the peak collector (drain) voltage, the RL
+// decay, the clamp's ratings (docs/method.md "Clamp (flyback) and timing").
 //
 // At turn-off the coil keeps its current I0 and drives the collector up until the clamp
 // conducts; with a clamp voltage Vc held constant the coil current decays as
 //   i(t) = (I0 + Vc/R) * exp(-t/tau) - Vc/R,  tau = L/R          (closed form, first-order RL)
-// (method.md, "Clamp (flyback) and timing").
 #pragma once
 
+#include <array>
 #include <optional>
+#include <string>
 
+#include "coilfit/check.hpp"
+#include "coilfit/corners.hpp"
 #include "coilfit/spec.hpp"
 
 namespace coilfit {
@@ -15,20 +19,24 @@ namespace coilfit {
 // Clamp voltages for the two corners of the method.
 struct ClampVoltages {
     // Highest clamp voltage while current flows (peak collector voltage = Vs_hi + this):
-    // diode Vf_max(I0); diode + zener Vz_hi + Vf_max; diode + resistor I0*Rs + Vf_max.
+    // diode Vf_max(I0); diode + zener Vz_hi + Vf_max; diode + resistor I0*Rs_hi + Vf_max.
     double peak_v = 0;
     // Lowest clamp voltage for timing: the diode's low drop, zener at its bottom tolerance.
     // For diode + resistor it is the diode drop alone, the resistor adds to the coil's R.
     double timing_v = 0;
-    // Resistance in series with the coil during the decay (diode + resistor), else 0.
+    // Resistance in series with the coil during the decay (diode + resistor), else 0: at its
+    // high tolerance for the peak and energy, at its low one for timing.
     double series_ohm = 0;
+    double series_timing_ohm = 0;
+    // The clamp part's own voltage at the peak (zener or TVS, without the diode), for its pulse.
+    double part_peak_v = 0;
     bool vf_outside = false;  // I0 outside the diode's forward-voltage points
     bool limited = true;      // false for "none": only breakdown limits the voltage
 };
 
 // ln_i0 is ln(i0_a) when the caller has it (one log serves every lookup), else NaN.
-[[nodiscard]] ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v,
-                                           double vz_hi_v, double ln_i0 = ln_not_set);
+[[nodiscard]] ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditions& c,
+                                           double ln_i0 = ln_not_set);
 
 // The decay of the coil current through the clamp, closed form with Vc constant.
 struct Decay {
@@ -48,5 +56,29 @@ struct Decay {
 
 // Stored magnetic energy 1/2 L I^2.
 [[nodiscard]] constexpr double stored_energy(double l_h, double i_a) { return 0.5 * l_h * i_a * i_a; }
+
+// The clamp at one ambient corner.
+struct ClampCorner {
+    double i0_a = 0;
+    ClampVoltages v{};
+    double peak_collector_v = 0;   // Vs_hi + the highest clamp voltage (or the transient, if higher)
+    bool has_timing = false;       // inductance given and the clamp limits the voltage
+    double release_time_s = 0, current_zero_time_s = 0, charge_c = 0;  // timing corner
+    double energy_j = 0, charge_peak_c = 0;                            // energy corner
+    bool has_rate = false;         // and a switching frequency
+    double clamp_power_w = 0, diode_average_current_a = 0, zener_power_w = 0, resistor_power_w = 0;
+};
+
+struct ClampFigures {
+    std::array<ClampCorner, corner_count> at{};
+    double stored_energy_j = 0;  // at the highest coil current
+};
+
+// How the diode.current check came out (CheckValue::detail).
+enum class DiodeCurrentCase : std::uint8_t { peak, average };
+
+struct Evaluation;
+[[nodiscard]] std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e);
+[[nodiscard]] std::string clamp_skip_reason(CheckId id, const Spec& spec);
 
 }  // namespace coilfit

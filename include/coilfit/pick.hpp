@@ -1,24 +1,25 @@
-// Which parts of the table would work? Sizes the spec afresh with every transistor (and, for
-// diode clamps, every diode) and ranks the combinations: passing first, then by the smallest
-// margin over all checks (largest first: the most robust design), then by lower pin current,
-// then by ids, so the order is stable and deterministic.
+// Which parts of the table would work? Sizes the spec afresh with every transistor of every
+// driver kind (and, for diode clamps, every diode) and ranks the combinations: passing first,
+// then by the smallest margin over all checks (largest first: the most robust design), then by
+// lower pin current, then by ids, so the order is stable and deterministic.
 #pragma once
 
 #include <optional>
 #include <string>
 #include <vector>
 
+#include "coilfit/check.hpp"
 #include "coilfit/parts.hpp"
-#include "coilfit/report.hpp"
 #include "coilfit/spec.hpp"
 
 namespace coilfit {
 
 struct Candidate {
     std::string transistor;
+    std::string driver;                 // npn, darlington, nmos, array
     std::string diode;                  // empty for clamp "none"
-    std::string family;                 // "small-signal", "medium-power", "darlington"
-    std::optional<double> base_resistor_ohm;
+    std::string family;                 // "small-signal", "medium-power", "darlington", ...
+    std::optional<double> resistor_ohm;  // base or gate resistor
     Verdict verdict = Verdict::fail;    // pass | fail
     std::string worst_check;            // id of the check with the smallest margin
     double worst_margin = 0;
@@ -32,8 +33,8 @@ struct PickResult {
     std::vector<std::string> reasons;
 };
 
-// The transistor family used to group reasons.
-[[nodiscard]] std::string transistor_family(const Bipolar& part);
+// The family used to group reasons.
+[[nodiscard]] std::string transistor_family(const Transistor& part);
 
 [[nodiscard]] PickResult pick(const Spec& spec, const Catalogue& catalogue);
 

@@ -33,6 +33,8 @@ enum class Unit {
     celsius,          // a temperature, degrees Celsius ("50C", "-20°C", 50)
     kelvin,           // a temperature difference ("25K")
     kelvin_per_watt,  // thermal resistance ("200K/W", "200°C/W")
+    per_kelvin,       // a relative temperature coefficient ("0.6%/K", 0.006)
+    volt_per_kelvin,  // a voltage temperature coefficient ("-4mV/K", "2mV/°C")
 };
 
 // "a voltage", "a current", ... for messages.
@@ -52,6 +54,8 @@ enum class Unit {
 //   percentages for ratios:                     "10%"
 //   temperatures in °C, differences in K:       "50C", "-20°C", "25K"
 //   thermal resistance:                         "200K/W", "200°C/W"
+//   temperature coefficients:                   "0.6%/K", "0.006/K", "-4mV/K", "2mV/°C"
+//   charge (where a charge is expected):        "1.5nC" (C is coulomb there, not °C)
 // Throws InputError with a message without field path, for example:
 //   expected a voltage such as "12V", got "12A" (a current)
 [[nodiscard]] double parse_quantity(std::string_view text, Unit expected);

@@ -1,5 +1,6 @@
-// The result of sizing one channel: quantities, checks, notes and cautions. Renderers in
-// src/io turn it into text or JSON (schema "coilfit.report/1"); the core never prints.
+// The result of sizing one channel: the resolved inputs, the sized design, quantities, checks
+// with their words, notes and cautions. Renderers in src/io turn it into text, JSON, a netlist or
+// a plot without sizing again; the core never prints.
 #pragma once
 
 #include <optional>
@@ -7,13 +8,13 @@
 #include <string_view>
 #include <vector>
 
+#include "coilfit/check.hpp"
 #include "coilfit/eseries.hpp"
 #include "coilfit/quantity.hpp"
+#include "coilfit/sizing.hpp"
+#include "coilfit/spec.hpp"
 
 namespace coilfit {
-
-enum class Verdict { pass, warn, fail, skip };
-[[nodiscard]] std::string_view verdict_name(Verdict verdict);  // "pass", "warn", "fail", "skip"
 
 struct Check {
     std::string id;  // "coil.operate", "pin.current", ...
@@ -25,6 +26,9 @@ struct Check {
     // for lower limits. Positive passes, negative fails; absent when not computable.
     std::optional<double> margin;
     std::string message;
+    std::string reason;          // why a check was skipped (empty otherwise)
+    Corner corner = Corner::cold;  // the ambient corner of the value
+    bool beyond_data = false;    // it used a part value beyond the part's data
 };
 
 // One entry of the flat "quantities" object: key with unit suffix ("coil_current_max_a").
@@ -35,28 +39,35 @@ struct QuantityEntry {
     std::string label;  // words for the text report: "coil current, highest"
 };
 
-struct ResistorChoice {
+// The drive resistor of the design (base or gate resistor; none for an array channel).
+struct ResistorReport {
+    std::string_view kind = "base resistor";  // "base resistor", "gate resistor", "" (built in)
     std::optional<double> value_ohm;  // absent when no value of the series can work
     ESeries series = ESeries::e24;
     double tolerance = 0.05;
-    double power_rating_w = 0.125;
+    std::optional<double> power_rating_w;
     bool fixed = false;  // given by the spec rather than chosen
+    std::optional<double> window_min_ohm, window_max_ohm;
 };
 
 // One row of the clamp trade-off table (diode alone, diode + zener, ...).
 struct ClampOption {
     std::string label;                // "diode 1N4148", "diode + zener 1N4742A (12 V)"
+    ClampSpec clamp;                  // the clamp it stands for (the plot draws each option)
     double peak_collector_v = 0;      // at the corner that is worst for it
     std::optional<double> release_time_s;
     double clamp_energy_j = 0;
-    bool within_rating = true;        // collector within the transistor's derated Vceo
+    bool within_rating = true;        // collector within the transistor's derated rating (and pulse)
+    std::string failed_check;         // the first check this option fails, if any
     bool chosen = false;              // the clamp the spec uses
 };
 
 struct SizingReport {
+    Spec spec;    // the inputs as understood
+    Sized sized;  // the design and its worst-case evaluation
     Verdict verdict = Verdict::fail;  // pass | fail (warnings do not fail)
     bool has_warnings = false;
-    ResistorChoice resistor;
+    ResistorReport resistor;
     std::vector<QuantityEntry> quantities;
     std::vector<Check> checks;
     std::vector<ClampOption> clamp_options;
@@ -68,5 +79,15 @@ struct SizingReport {
     // The check with the smallest margin (the binding one); nullptr when none has a margin.
     [[nodiscard]] const Check* worst_check() const;
 };
+
+// Sizes and checks one channel at worst case. Pure. The catalogue supplies the zeners (and TVS)
+// for the clamp trade-off table (it may be empty).
+[[nodiscard]] SizingReport size(const Spec& spec, const Catalogue& catalogue);
+
+// The words of one evaluated check, from the stage that owns it.
+[[nodiscard]] std::string check_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e);
+[[nodiscard]] std::string check_skip_reason(CheckId id, const Spec& spec);
+// The unit a check's value is in (clamp.pulse is an energy for an avalanche rating).
+[[nodiscard]] Unit check_unit(CheckId id, const CheckValue& c);
 
 }  // namespace coilfit

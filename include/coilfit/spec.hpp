@@ -1,41 +1,52 @@
 // The validated inputs of one driver channel, in SI units (temperatures in °C, ratios as
 // fractions). The I/O layer builds a Spec from JSON or flags, fills every default of the method
-// and lists the defaults it used; the core only reads it.
+// (coilfit/defaults.hpp) and lists the defaults it used; the core only reads it. The driver kind
+// follows the transistor's record: npn or darlington (base resistor), nmos (gate resistor),
+// array (a built-in input resistor).
 #pragma once
 
 #include <optional>
 #include <string>
 #include <vector>
 
+#include "coilfit/defaults.hpp"
 #include "coilfit/eseries.hpp"
 #include "coilfit/parts.hpp"
 
 namespace coilfit {
 
-enum class ClampType { diode, diode_zener, diode_resistor, none };
+enum class ClampType { diode, diode_zener, diode_resistor, diode_tvs, none };
 enum class LoadKind { ac, dc };
 
 [[nodiscard]] std::string_view clamp_type_name(ClampType type);  // "diode", "diode_zener", ...
 
 struct SupplySpec {
-    double voltage_v = 0;
-    double tolerance = 0.10;
+    double voltage_v = 0;  // nominal; 0 when only min and max are given
+    double tolerance = defaults::supply_tolerance;
+    std::optional<double> min_v, max_v;     // an asymmetric band (e.g. 9 V to 16 V), instead of the tolerance
+    std::optional<double> transient_max_v;  // the highest the rail reaches in a transient
+
+    [[nodiscard]] double lo_v() const { return min_v ? *min_v : voltage_v * (1.0 - tolerance); }
+    [[nodiscard]] double hi_v() const { return max_v ? *max_v : voltage_v * (1.0 + tolerance); }
 };
 
 struct AmbientSpec {
-    double min_c = 0;
-    double max_c = 50;
+    double min_c = defaults::ambient_min_c;
+    double max_c = defaults::ambient_max_c;
 };
 
 struct CoilSpec {
     std::string preset;  // the preset the fields started from, if any
     double rated_voltage_v = 0;
     double resistance_ohm = 0;           // at reference_temp_c
-    double tolerance = 0.10;             // of the resistance
-    double reference_temp_c = 20;
-    double must_operate = 0.75;          // fraction of rated voltage, at reference temperature
-    double must_release = 0.10;          // fraction of rated voltage
-    double self_heating_k = 0;           // winding rise above ambient when energised
+    double tolerance = defaults::coil_tolerance;  // of the resistance
+    double reference_temp_c = defaults::coil_reference_temp_c;
+    double must_operate = defaults::must_operate;  // fraction of rated voltage
+    double must_release = defaults::must_release;  // fraction of rated voltage
+    std::optional<double> must_operate_temp_c;     // coil temperature the must-operate is stated at
+    std::optional<double> self_heating_k;          // winding rise above ambient when energised
+    std::optional<double> thermal_resistance_k_per_w;  // winding to ambient: the rise from its power
+    std::optional<double> max_temperature_c;       // insulation class limit
     std::optional<double> inductance_h;  // energised (armature closed) inductance
     std::optional<double> max_voltage_v;
     std::optional<double> max_release_time_s;
@@ -44,9 +55,10 @@ struct CoilSpec {
 struct PinSpec {
     std::string preset;
     double vdd_v = 0;
-    double vdd_tolerance = 0.05;
+    double vdd_tolerance = defaults::pin_vdd_tolerance;
     std::optional<double> voh_v;          // guaranteed output high at voh_current_a
     std::optional<double> voh_current_a;
+    std::optional<double> voh_vdd_v;      // the supply VOH is stated at (default: the lowest VDD)
     double max_current_a = 0;             // the most the pin may source
 };
 
@@ -54,24 +66,41 @@ struct ClampSpec {
     ClampType type = ClampType::diode;
     std::optional<Diode> diode;
     std::optional<Zener> zener;
+    std::optional<Tvs> tvs;
     std::optional<double> resistor_ohm;   // diode_resistor only
+    double resistor_tolerance = defaults::clamp_resistor_tolerance;
+    double resistor_power_w = defaults::clamp_resistor_power_w;
 };
+
+enum class ResistorChoice : unsigned char { largest, centred };
 
 struct BaseResistorSpec {
     ESeries series = ESeries::e24;
     double tolerance = 0.05;
-    double power_rating_w = 0.125;
+    double power_rating_w = defaults::base_resistor_power_w;
+    std::optional<double> value_ohm;  // fixed: check it instead of choosing
+    ResistorChoice choose = ResistorChoice::largest;
+};
+
+struct GateResistorSpec {
+    ESeries series = ESeries::e24;
+    double tolerance = 0.05;
     std::optional<double> value_ohm;  // fixed: check it instead of choosing
 };
 
 struct Policy {
     std::optional<double> forced_gain;  // default 10 (npn) or the Vce(sat) test ratio (darlington)
-    double overdrive = 2;               // k: drive over minimum gain
-    double current_derating = 0.75;
-    double voltage_derating = 0.75;
-    double junction_margin_k = 25;
-    double power_derating = 0.50;       // of resistor and zener power ratings
-    double vbe_low_v = 0.6;             // the lowest Vbe, for the highest pin current
+    double overdrive = defaults::overdrive;  // k: drive over minimum gain
+    double current_derating = defaults::current_derating;
+    double voltage_derating = defaults::voltage_derating;
+    double junction_margin_k = defaults::junction_margin_k;
+    double power_derating = defaults::power_derating;  // of resistor and zener power ratings
+    double vbe_low_v = defaults::vbe_low_v;  // the lowest Vbe, for the highest pin current
+};
+
+struct SwitchingSpec {
+    std::optional<double> frequency_hz;
+    double duty = defaults::switching_duty;
 };
 
 struct LoadSpec {
@@ -86,15 +115,21 @@ struct Spec {
     AmbientSpec ambient;
     CoilSpec coil;
     PinSpec pin;
-    Bipolar transistor;
+    Transistor transistor;           // its kind selects the driver
     ClampSpec clamp;
-    BaseResistorSpec base_resistor;
-    std::optional<double> pulldown_ohm;
+    BaseResistorSpec base_resistor;  // bipolar drivers
+    GateResistorSpec gate_resistor;  // nmos drivers
+    std::optional<double> pulldown_ohm;  // base-emitter or gate-source pull-down
     Policy policy;
-    std::optional<double> switching_frequency_hz;
+    SwitchingSpec switching;
     std::optional<LoadSpec> load;
     // Defaults the loader filled in, one phrase each ("supply.tolerance 10 %"), for the notes.
+    // Words for people only: the core never reads them (it sees the optional fields).
     std::vector<std::string> defaults_used;
+
+    [[nodiscard]] const Bipolar* bipolar() const { return std::get_if<Bipolar>(&transistor); }
+    [[nodiscard]] const Mosfet* mosfet() const { return std::get_if<Mosfet>(&transistor); }
+    [[nodiscard]] const ArrayPart* array() const { return std::get_if<ArrayPart>(&transistor); }
 };
 
 }  // namespace coilfit

@@ -6,8 +6,9 @@
 //     and the spec's parts). Samples vary parts and conditions, never these choices.
 //  2. A sample is one point of the worst-case box (Conditions with every range collapsed to a
 //     point, lo == hi): supply, ambient, pin VDD, coil resistance at its reference temperature,
-//     base resistor, zener voltage, and the gain between the part's minimum (position 0) and
-//     typical (position 1). Each input is drawn on its own (independent).
+//     base (or gate) resistor, zener voltage, clamp resistor, the gain between the part's minimum
+//     (position 0) and typical (position 1), and a MOSFET's Rds(on) between its maximum (0) and
+//     typical (1). Each input is drawn on its own (independent).
 //  3. uniform: every input uniform over its band. normal: centred on the band with the band's
 //     half-width at 3 sigma, truncated at the band, so no sample lies outside the worst case.
 //     The gain is the one one-sided input: normal about the typical gain with the minimum at
@@ -27,6 +28,7 @@
 #include <string_view>
 #include <vector>
 
+#include "coilfit/corners.hpp"
 #include "coilfit/sizing.hpp"
 #include "coilfit/spec.hpp"
 
@@ -36,8 +38,10 @@ enum class Distribution : std::uint8_t { uniform, normal };
 [[nodiscard]] std::string_view distribution_name(Distribution d);  // "uniform", "normal"
 
 // The inputs a sample varies, in the order of their generator streams.
-enum class YieldInput : std::uint8_t { supply, ambient, pin_vdd, coil_resistance, base_resistor, zener, gain };
-inline constexpr std::size_t yield_input_count = 7;
+enum class YieldInput : std::uint8_t {
+    supply, ambient, pin_vdd, coil_resistance, base_resistor, zener, gain, clamp_resistor, rds_on
+};
+inline constexpr std::size_t yield_input_count = 9;
 [[nodiscard]] std::string_view yield_input_name(YieldInput input);  // "supply.voltage", ...
 
 // --- Counter-based random numbers -------------------------------------------------------------
@@ -64,7 +68,8 @@ inline constexpr std::size_t yield_input_count = 7;
 
 // --- Samples ----------------------------------------------------------------------------------
 
-// Where each input lies in its band, 0 (lo) .. 1 (hi); for the gain 0 = minimum, 1 = typical.
+// Where each input lies in its band, 0 (lo) .. 1 (hi); for the gain 0 = minimum, 1 = typical;
+// for Rds(on) 0 = maximum, 1 = typical.
 using BandPositions = std::array<double, yield_input_count>;
 
 // The point of the worst-case box at the given positions: every range collapsed (lo == hi).

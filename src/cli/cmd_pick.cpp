@@ -31,7 +31,10 @@ int run_pick(const PickOptions& options) {
             io::Json cj;
             cj["transistor"] = c.transistor;
             cj["diode"] = c.diode.empty() ? io::Json(nullptr) : io::Json(c.diode);
-            cj["base_resistor_ohm"] = c.base_resistor_ohm ? io::Json(*c.base_resistor_ohm) : io::Json(nullptr);
+            const bool bipolar = c.driver == "npn" || c.driver == "darlington";
+            cj["driver"] = c.driver;
+            cj["base_resistor_ohm"] = bipolar && c.resistor_ohm ? io::Json(*c.resistor_ohm) : io::Json(nullptr);
+            if (c.driver == "nmos") cj["gate_resistor_ohm"] = c.resistor_ohm ? io::Json(*c.resistor_ohm) : io::Json(nullptr);
             cj["verdict"] = verdict_name(c.verdict);
             cj["worst_check"] = c.worst_check;
             cj["worst_margin"] = c.worst_margin;
@@ -46,11 +49,11 @@ int run_pick(const PickOptions& options) {
         io::TextStyle style;
         style.color = use_color(options.common.output);
         std::vector<std::array<std::string, 7>> rows;
-        rows.push_back({"#", "transistor", "diode", "base resistor", "worst check", "margin", "verdict"});
+        rows.push_back({"#", "transistor", "diode", "resistor", "worst check", "margin", "verdict"});
         for (std::size_t i = 0; i < n; ++i) {
             const Candidate& c = result.candidates[i];
             rows.push_back({std::to_string(i + 1), c.transistor, c.diode.empty() ? "-" : c.diode,
-                            c.base_resistor_ohm ? format_quantity(*c.base_resistor_ohm, Unit::ohm) : "none",
+                            c.driver == "array" ? "built in" : c.resistor_ohm ? format_quantity(*c.resistor_ohm, Unit::ohm) : "none",
                             c.worst_check, c.worst_margin < -9.99 ? std::string("<-999 %") : fmt::format("{:+.0f} %", c.worst_margin * 100.0),
                             c.verdict == Verdict::pass ? "pass" : "FAIL"});
         }

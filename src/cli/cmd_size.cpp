@@ -22,16 +22,16 @@ int run_size(const SizeOptions& options) {
     const SizingReport report = size(spec, table.catalogue);
     if (!options.netlist.empty()) {
         // Built before anything is written, so a design that cannot be simulated writes nothing.
-        emit(io::spice_netlist(spec, size_numbers(spec)), options.netlist);
+        emit(io::spice_netlist(report), options.netlist);
     }
     std::string text;
     if (options.common.format == "json") {
-        text = io::report_to_json(report, spec).dump(2) + "\n";
+        text = io::report_to_json(report).dump(2) + "\n";
     } else {
         io::TextStyle style;
         style.color = use_color(options.common.output);
         style.width = text_width();
-        text = io::render_text(report, spec, style);
+        text = io::render_text(report, style);
     }
     emit(text, options.common.output);
     if (report.verdict == Verdict::fail) return exit_fail;

@@ -42,8 +42,14 @@ std::string percent(double rate) {
     return fmt::format("{:.3f} %", shown);
 }
 
-bool has_typical_gain(const Bipolar& part) {
-    return std::any_of(part.hfe_min.begin(), part.hfe_min.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
+bool has_typical_gain(const Transistor& t) {
+    const auto* part = std::get_if<Bipolar>(&t);
+    return part && std::any_of(part->hfe_min.begin(), part->hfe_min.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
+}
+
+bool has_typical_rds(const Transistor& t) {
+    const auto* part = std::get_if<Mosfet>(&t);
+    return part && std::any_of(part->rds_on.begin(), part->rds_on.end(), [](const RdsOnPoint& p) { return p.typ_ohm.has_value(); });
 }
 
 // The inputs that vary in this spec, in words.
@@ -58,6 +64,8 @@ std::vector<std::string> varied_inputs(const Spec& spec) {
         v.emplace_back("clamp.zener");
     }
     if (has_typical_gain(spec.transistor)) v.emplace_back("transistor.hfe");
+    if (has_typical_rds(spec.transistor)) v.emplace_back("transistor.rds_on");
+    if (spec.clamp.type == ClampType::diode_resistor && spec.clamp.resistor_tolerance > 0) v.emplace_back("clamp.resistor");
     return v;
 }
 
@@ -70,18 +78,24 @@ std::string_view input_words(std::string_view id) {
     if (id == "base_resistor.tolerance") return "base resistor";
     if (id == "clamp.zener") return "zener voltage";
     if (id == "transistor.hfe") return "gain (minimum to typical)";
+    if (id == "transistor.rds_on") return "Rds(on) (maximum to typical)";
+    if (id == "clamp.resistor") return "clamp resistor";
     return id;
 }
 
 std::string design_line(const Spec& spec, const YieldResult& r) {
-    std::string s = spec.transistor.id;
-    s += ", base resistor ";
-    if (r.design.rb_ohm) {
-        s += format_quantity(*r.design.rb_ohm, Unit::ohm);
-        s += spec.base_resistor.value_ohm ? " (fixed" : fmt::format(" ({}", eseries_name(spec.base_resistor.series));
-        s += fmt::format(", {} %)", spec.base_resistor.tolerance * 100.0);
-    } else {
-        s += "none (no value of the series works)";
+    std::string s = display_id(origin(spec.transistor));
+    if (spec.bipolar() || spec.mosfet()) {
+        const bool bipolar = spec.bipolar() != nullptr;
+        s += bipolar ? ", base resistor " : ", gate resistor ";
+        if (r.design.r_drive_ohm) {
+            s += format_quantity(*r.design.r_drive_ohm, Unit::ohm);
+            const ESeries series = bipolar ? spec.base_resistor.series : spec.gate_resistor.series;
+            s += r.design.resistor_fixed ? " (fixed" : fmt::format(" ({}", eseries_name(series));
+            s += fmt::format(", {} %)", (bipolar ? spec.base_resistor.tolerance : spec.gate_resistor.tolerance) * 100.0);
+        } else {
+            s += "none (no value of the series works)";
+        }
     }
     s += ", clamp ";
     s += clamp_type_name(spec.clamp.type);
@@ -165,8 +179,10 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
     j["confidence"] = 0.95;
     j["worst_case"] = r.design.worst.passes() ? "pass" : "fail";
     io::Json design;
-    design["transistor"] = spec.transistor.id;
-    design["base_resistor_ohm"] = r.design.rb_ohm ? io::Json(*r.design.rb_ohm) : io::Json(nullptr);
+    design["transistor"] = origin(spec.transistor).id;
+    design["driver"] = transistor_kind_name(spec.transistor);
+    design[spec.mosfet() ? "gate_resistor_ohm" : "base_resistor_ohm"] =
+        r.design.r_drive_ohm ? io::Json(*r.design.r_drive_ohm) : io::Json(nullptr);
     design["clamp"] = clamp_type_name(spec.clamp.type);
     design["diode"] = spec.clamp.diode ? io::Json(spec.clamp.diode->id) : io::Json(nullptr);
     design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(spec.clamp.zener->id)

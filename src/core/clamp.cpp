@@ -1,11 +1,17 @@
+// The clamp stage's numbers (docs/method.md "Clamp (flyback) and timing"); words in
+// clamp_words.cpp.
 #include "coilfit/clamp.hpp"
 
+#include <algorithm>
+#include <cmath>
+
 #include "clamp_math.hpp"
+#include "stages.hpp"
 
 namespace coilfit {
 
-ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v, double ln_i0) {
-    return clamp_math::voltages(clamp, i0_a, vz_lo_v, vz_hi_v, ln_i0);
+ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditions& c, double ln_i0) {
+    return clamp_math::voltages(clamp, i0_a, c, ln_i0);
 }
 
 Decay rl_decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_release_a) {
@@ -16,4 +22,135 @@ double clamp_energy(const Decay& decay, double vc_v, double series_ohm) {
     return clamp_math::energy(decay, vc_v, series_ohm);
 }
 
+namespace stages {
+namespace {
+
+// The checks that grow with the switching rate: the diode's average current (from the charge at
+// the timing corner, `slow`) and the clamp's power (from the charge and heat at the energy
+// corner, `hot`, and the clamp energy per turn-off worked out from it). diode_peak is the diode's
+// peak-current check, kept when it is the tighter of the two. True when both rate checks pass.
+bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, const CheckValue& diode_peak,
+                     const Decay& slow, const Decay& hot, double clamp_energy_j, bool all, CheckSet& checks) {
+    const Spec& spec = *p.spec;
+    const Policy& policy = spec.policy;
+    const double f = *spec.switching.frequency_hz;
+    k.has_rate = true;
+    k.clamp_power_w = f * clamp_energy_j;
+    k.diode_average_current_a = f * slow.charge_c;  // most charge at the lowest clamp voltage
+    const Diode& d = *spec.clamp.diode;
+    // The diode's average-current rating also bounds the repetitive clamp current.
+    CheckValue avg = at_most(k.diode_average_current_a, d.if_avg_a);
+    avg.detail = static_cast<std::uint8_t>(DiodeCurrentCase::average);
+    // The tighter of the two stands; for verdicts alone, the failing one (no margins needed).
+    const bool avg_stands = all ? avg.margin() < diode_peak.margin() : avg.verdict == Verdict::fail;
+    checks.set(CheckId::diode_current, avg_stands ? avg : diode_peak);
+    CheckValue power;
+    switch (spec.clamp.type) {
+    case ClampType::diode_zener:
+        k.zener_power_w = f * c.vz_hi_v * hot.charge_c;
+        power = at_most(k.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w);
+        break;
+    case ClampType::diode_resistor:
+        k.resistor_power_w = f * k.v.series_ohm * hot.i2_integral;
+        power = at_most(k.resistor_power_w, policy.power_derating * spec.clamp.resistor_power_w);
+        break;
+    case ClampType::diode:
+    case ClampType::diode_tvs:
+        // A diode has no power rating of its own here: its dissipation at the rated average
+        // current, if_avg * Vf(if_avg), stands for it.
+        power = at_most(k.clamp_power_w, p.diode_rated_power_w);
+        break;
+    case ClampType::none: return true;
+    }
+    checks.set(CheckId::clamp_power, power);
+    return avg.verdict == Verdict::pass && power.verdict == Verdict::pass;
+}
+
+// Release time, charge and energy of the decay, and the rate checks (see set_rate_checks).
+void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_ohm, double release_current_a, bool all,
+                   ClampCorner& k, CheckSet& checks) {
+    const Spec& spec = *p.spec;
+    const double l = *spec.coil.inductance_h;
+    const double i0 = k.i0_a;
+    const bool release_checked = spec.coil.max_release_time_s.has_value();
+    const bool rate_checked = spec.switching.frequency_hz.has_value();
+    k.has_timing = true;
+    // Timing corner: cold coil (longest tau, highest I0) and the lowest clamp voltage.
+    // Energy corner: the highest clamp voltage takes the largest share of the stored energy.
+    const double r_loop_slow = r_coil_cold_ohm + k.v.series_timing_ohm;
+    const double r_loop_hot = r_coil_cold_ohm + k.v.series_ohm;
+    const double vc_energy = spec.clamp.type == ClampType::diode_resistor ? k.v.peak_v - i0 * k.v.series_ohm : k.v.peak_v;
+    const CheckValue diode_peak = checks[CheckId::diode_current];
+    // Verdicts only, no series resistor: the charge through the clamp is at most tau*I0
+    // (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the rate checks grow
+    // with it, so where they pass at that bound they pass, and the charge logarithms are
+    // spared. Otherwise (and always for every figure) the decays are worked out.
+    bool exact_rate = all || rate_checked;
+    if (!all && rate_checked && k.v.series_ohm == 0) {
+        Decay bound;
+        bound.tau_s = l / r_loop_hot;
+        bound.charge_c = bound.tau_s * i0;
+        const double bound_energy = clamp_math::energy(bound, vc_energy, k.v.series_ohm);
+        exact_rate = !set_rate_checks(k, p, c, diode_peak, bound, bound, bound_energy, all, checks);
+    }
+    if (exact_rate || release_checked) {
+        // A release current of I0 spares the release log where no one reads the release time;
+        // without exact rate checks the charge (and its log) is not needed either.
+        const double i_release = all || release_checked ? release_current_a : i0;
+        const Decay slow = clamp_math::decay(l, r_loop_slow, k.v.timing_v, i0, i_release, exact_rate);
+        k.release_time_s = slow.release_time_s;
+        k.current_zero_time_s = slow.end_time_s;
+        k.charge_c = slow.charge_c;
+        if (exact_rate) {
+            // Only the energy corner's charge and heat are used, never its release time.
+            const Decay hot = clamp_math::decay(l, r_loop_hot, vc_energy, i0, i0);
+            k.charge_peak_c = hot.charge_c;
+            k.energy_j = clamp_math::energy(hot, vc_energy, k.v.series_ohm);
+            if (rate_checked) set_rate_checks(k, p, c, diode_peak, slow, hot, k.energy_j, all, checks);
+        }
+    }
+}
+
+}  // namespace
+
+void prepare_clamp(const Spec& spec, Prepared& p) {
+    if (!spec.clamp.diode) return;
+    const Diode& d = *spec.clamp.diode;
+    p.clamp_diode = &d;
+    p.derated_vrrm_v = spec.policy.voltage_derating * d.vrrm_v;
+    p.diode_peak_limit_a = d.ifrm_a ? *d.ifrm_a : d.ifsm_a ? *d.ifsm_a : d.if_avg_a;
+    p.diode_rated_power_w = d.if_avg_a * vf_max_at(d, d.if_avg_a).value;
+}
+
+void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double r_coil_cold_ohm,
+                  double release_current_a, const DriverCommon& driver, bool all, ClampCorner& k, CheckSet& checks) {
+    const Spec& spec = *p.spec;
+    k.i0_a = i0_a;
+    k.has_timing = false;
+    k.has_rate = false;
+    k.release_time_s = 0;
+    k.v = clamp_math::voltages(spec.clamp, i0_a, c, ln_i0);
+    if (!k.v.limited) {
+        checks.set(CheckId::transistor_voltage, failed_without_value(driver.peak_limit_v));
+        return;
+    }
+    // Peak collector voltage: the highest supply plus the highest clamp voltage, or the rail's
+    // highest transient when that is higher.
+    k.peak_collector_v = std::max(c.vs_transient_v, c.vs_hi_v + k.v.peak_v);
+    checks.set(CheckId::transistor_voltage, at_most(k.peak_collector_v, driver.peak_limit_v));
+    // The diode blocks the supply while the transistor conducts: VRRM >= Vs_hi / d_V.
+    checks.set(CheckId::diode_voltage, at_most(c.vs_hi_v, p.derated_vrrm_v));
+    // Peak forward current: the whole coil current at turn-off, against the repetitive peak
+    // rating (or the surge rating, or the average rating when neither is given).
+    CheckValue peak = at_most(i0_a, p.diode_peak_limit_a);
+    peak.detail = static_cast<std::uint8_t>(DiodeCurrentCase::peak);
+    checks.set(CheckId::diode_current, peak);
+    const bool release_checked = spec.coil.max_release_time_s.has_value();
+    const bool rate_checked = spec.switching.frequency_hz.has_value();
+    if (spec.coil.inductance_h && (all || release_checked || rate_checked)) {
+        decay_figures(p, c, r_coil_cold_ohm, release_current_a, all, k, checks);
+    }
+}
+
+}  // namespace stages
 }  // namespace coilfit

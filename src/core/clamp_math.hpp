@@ -5,12 +5,15 @@
 
 #include <cmath>
 
+#include <algorithm>
+
 #include "coilfit/clamp.hpp"
+#include "coilfit/corners.hpp"
 #include "curves.hpp"
 
 namespace coilfit::clamp_math {
 
-inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v, double ln_i0) {
+inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, const Conditions& c, double ln_i0) {
     ClampVoltages out;
     if (clamp.type == ClampType::none || !clamp.diode) {
         out.limited = false;
@@ -25,14 +28,27 @@ inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, double vz_lo_
         out.timing_v = vf_lo;
         break;
     case ClampType::diode_zener:
-        out.peak_v = vz_hi_v + vf.value;
-        out.timing_v = vz_lo_v + vf_lo;
+        out.part_peak_v = c.vz_hi_v;
+        out.peak_v = c.vz_hi_v + vf.value;
+        out.timing_v = c.vz_lo_v + vf_lo;
         break;
     case ClampType::diode_resistor: {
         const double rs = clamp.resistor_ohm.value_or(0.0);
-        out.peak_v = i0_a * rs + vf.value;
+        out.series_ohm = rs * c.rs_hi_factor;
+        out.series_timing_ohm = rs * c.rs_lo_factor;
+        out.peak_v = i0_a * out.series_ohm + vf.value;
         out.timing_v = vf_lo;
-        out.series_ohm = rs;
+        break;
+    }
+    case ClampType::diode_tvs: {
+        const Tvs& t = *clamp.tvs;
+        // Vc(I0) linear in current from Vbr max at 1 mA to the clamping voltage at Ipp, the same
+        // line beyond Ipp (docs/method.md "TVS clamp"); timing with the lowest breakdown.
+        constexpr double i_br_a = 1e-3;
+        const double slope = t.ipp_a > i_br_a ? (t.vc_v - t.vbr_max_v) / (t.ipp_a - i_br_a) : 0.0;
+        out.part_peak_v = t.vbr_max_v + slope * std::max(0.0, i0_a - i_br_a);
+        out.peak_v = out.part_peak_v + vf.value;
+        out.timing_v = t.vbr_min_v + vf_lo;
         break;
     }
     case ClampType::none: break;

@@ -14,18 +14,23 @@ namespace coilfit::curves {
 // ln_x is ln(x) or NaN (then computed only when needed); ln_p gives a point's ln(x) or NaN.
 template <typename Points, typename X, typename LnX, typename Y>
 inline Lookup interpolate_log(const Points& points, double x, double ln_x, X get_x, LnX get_ln, Y get_y) {
-    if (points.empty() || !(x > 0)) return {points.empty() ? 0.0 : get_y(points.front()), true};
+    if (points.empty() || !(x > 0)) return {points.empty() ? 0.0 : get_y(points.front()), true, Side::below};
+    const double x_first = get_x(points.front());
+    const double x_last = get_x(points.back());
     if (points.size() == 1) {
-        // One point is used everywhere; flag it when the operating point is more than a
-        // factor of two away from it.
-        const double ratio = x / get_x(points.front());
-        return {get_y(points.front()), ratio > 2.0 || ratio < 0.5};
+        // One point is used everywhere; it is flagged (outside) when the operating point is
+        // more than a factor of two away, and its side is told exactly for the direction rule.
+        const double ratio = x / x_first;
+        const Side side = x > x_first * (1.0 + 1e-9) ? Side::above : x < x_first * (1.0 - 1e-9) ? Side::below : Side::within;
+        return {get_y(points.front()), ratio > 2.0 || ratio < 0.5, side};
     }
-    if (x <= get_x(points.front())) {
-        return {get_y(points.front()), x < get_x(points.front()) * (1.0 - 1e-9)};
+    if (x <= x_first) {
+        const bool out = x < x_first * (1.0 - 1e-9);
+        return {get_y(points.front()), out, out ? Side::below : Side::within};
     }
-    if (x >= get_x(points.back())) {
-        return {get_y(points.back()), x > get_x(points.back()) * (1.0 + 1e-9)};
+    if (x >= x_last) {
+        const bool out = x > x_last * (1.0 + 1e-9);
+        return {get_y(points.back()), out, out ? Side::above : Side::within};
     }
     const auto ln_of = [&](const auto& p) {
         const double l = get_ln(p);
@@ -40,10 +45,10 @@ inline Lookup interpolate_log(const Points& points, double x, double ln_x, X get
             const double y0 = get_y(points[i - 1]);
             const double y1 = get_y(points[i]);
             const double t = (lx - l0) / (l1 - l0);
-            return {y0 + t * (y1 - y0), false};
+            return {y0 + t * (y1 - y0), false, Side::within};
         }
     }
-    return {get_y(points.back()), true};
+    return {get_y(points.back()), true, Side::above};
 }
 
 inline constexpr auto gain_x = [](const GainPoint& p) { return p.ic_a; };
@@ -74,6 +79,14 @@ inline Lookup vbe_sat_at(const Bipolar& part, double ic_a, double ln_ic) {
 
 inline Lookup vf_max_at(const Diode& part, double if_a, double ln_if) {
     return interpolate_log(part.vf, if_a, ln_if, fwd_x, fwd_ln, fwd_y);
+}
+
+inline constexpr auto cur_x = [](const CurrentPoint& p) { return p.ic_a; };
+inline constexpr auto cur_ln = [](const CurrentPoint& p) { return p.ln_ic; };
+inline constexpr auto cur_y = [](const CurrentPoint& p) { return p.v_max; };
+
+inline Lookup curve_at(const std::vector<CurrentPoint>& points, double ic_a, double ln_ic) {
+    return interpolate_log(points, ic_a, ln_ic, cur_x, cur_ln, cur_y);
 }
 
 inline double vce_sat_test_ratio(const Bipolar& part, double ic_a, double ln_ic) {

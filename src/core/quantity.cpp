@@ -34,6 +34,8 @@ UnitInfo info(Unit unit) {
     case Unit::celsius: return {"a temperature", "°C", "_c", "50C"};
     case Unit::kelvin: return {"a temperature difference", "K", "_k", "25K"};
     case Unit::kelvin_per_watt: return {"a thermal resistance", "K/W", "_k_per_w", "200K/W"};
+    case Unit::per_kelvin: return {"a temperature coefficient", "/K", "_per_k", "0.6%/K"};
+    case Unit::volt_per_kelvin: return {"a voltage temperature coefficient", "V/K", "_v_per_k", "-4mV/K"};
     }
     return {"a value", "", "", "1"};
 }
@@ -45,6 +47,9 @@ struct Symbol {
 };
 constexpr std::array symbols{
     Symbol{"°C/W", Unit::kelvin_per_watt}, Symbol{"K/W", Unit::kelvin_per_watt},
+    Symbol{"V/°C", Unit::volt_per_kelvin}, Symbol{"V/K", Unit::volt_per_kelvin},
+    Symbol{"V/C", Unit::volt_per_kelvin},  Symbol{"/°C", Unit::per_kelvin},
+    Symbol{"/K", Unit::per_kelvin},        Symbol{"/C", Unit::per_kelvin},
     Symbol{"C/W", Unit::kelvin_per_watt},  Symbol{"ohms", Unit::ohm},
     Symbol{"ohm", Unit::ohm},              Symbol{"Ohm", Unit::ohm},
     Symbol{"\xCE\xA9", Unit::ohm},         Symbol{"\xE2\x84\xA6", Unit::ohm},
@@ -210,6 +215,9 @@ std::string format_quantity(double value, Unit unit, int significant) {
     }
     case Unit::kelvin: return plain_number(value, significant) + " K";
     case Unit::kelvin_per_watt: return plain_number(value, significant) + " K/W";
+    case Unit::per_kelvin:
+        if (!std::isfinite(value * 100.0)) return plain_number(value, significant) + " /K";
+        return plain_number(value * 100.0, significant) + " %/K";
     default: break;
     }
     static constexpr std::array<std::pair<double, std::string_view>, 8> steps{{
@@ -293,6 +301,9 @@ double parse_quantity(std::string_view text, Unit expected) {
             if (expected != Unit::ratio) fail(expected, text, "a percentage");
             factor = 0.01;
             found = Unit::ratio;
+        } else if (rest == "%/K" || rest == "%/°C" || rest == "%/C") {
+            factor = 0.01;
+            found = Unit::per_kelvin;
         } else if (expected == Unit::ohm && rest.front() == 'K' &&
                    (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
             // "33K" and "2.2KΩ" for kilo-ohms are common on resistor labels.
@@ -318,11 +329,16 @@ double parse_quantity(std::string_view text, Unit expected) {
             if (!matched) fail(expected, text);
         }
     }
+    // "C" is a coulomb where a charge is expected ("1.5nC"), a temperature elsewhere.
+    if (found == Unit::celsius && expected == Unit::coulomb && (rest.back() == 'C') && rest.find("°") == std::string_view::npos) {
+        found = Unit::coulomb;
+    }
     if (found && *found != expected) {
         fail(expected, text, info(*found).noun);
     }
     if (factor != 1.0 && (expected == Unit::celsius || expected == Unit::kelvin ||
-                          expected == Unit::number || (expected == Unit::ratio && !found))) {
+                          expected == Unit::number || (expected == Unit::ratio && !found) ||
+                          (expected == Unit::per_kelvin && found != Unit::per_kelvin))) {
         fail(expected, text, "no prefix here");
     }
     const double result = value * factor;

@@ -68,9 +68,9 @@ inline double truncated_z(double u) {
 inline double position_of(YieldInput input, double u, Distribution distribution) {
     if (distribution == Distribution::uniform) return u;
     const double z = truncated_z(u);
-    if (input == YieldInput::gain) {
-        // Normal about the typical gain (position 1) with the minimum at -3 sigma; above typical
-        // the gain is taken at typical.
+    if (input == YieldInput::gain || input == YieldInput::rds_on) {
+        // Normal about the typical value (position 1) with the limit at -3 sigma; beyond typical
+        // the value is taken at typical.
         return z >= 0 ? 1.0 : 1.0 + z * (1.0 / 3.0);
     }
     // Centred on the band, half-width at 3 sigma: -3 -> 0, +3 -> 1.
@@ -92,6 +92,8 @@ std::string_view yield_input_name(YieldInput input) {
     case YieldInput::base_resistor: return "base_resistor.tolerance";
     case YieldInput::zener: return "clamp.zener";
     case YieldInput::gain: return "transistor.hfe";
+    case YieldInput::clamp_resistor: return "clamp.resistor";
+    case YieldInput::rds_on: return "transistor.rds_on";
     }
     return "supply.voltage";
 }
@@ -113,6 +115,8 @@ Conditions conditions_at(const Conditions& box, const BandPositions& t) {
     c.r_coil_lo_ohm = c.r_coil_hi_ohm = at(box.r_coil_lo_ohm, box.r_coil_hi_ohm, pos(YieldInput::coil_resistance));
     c.rb_lo_factor = c.rb_hi_factor = at(box.rb_lo_factor, box.rb_hi_factor, pos(YieldInput::base_resistor));
     c.vz_lo_v = c.vz_hi_v = at(box.vz_lo_v, box.vz_hi_v, pos(YieldInput::zener));
+    c.rs_lo_factor = c.rs_hi_factor = at(box.rs_lo_factor, box.rs_hi_factor, pos(YieldInput::clamp_resistor));
+    c.rds_position = pos(YieldInput::rds_on);
     // The box's own gain position is its worst (0, minimum); a sample may lie up to typical.
     c.hfe_position = pos(YieldInput::gain);
     return c;
@@ -144,7 +148,6 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
     // An input whose band is a single point needs no draw: its position has no effect. The gain
     // has none without a typical value (typical falls back to the minimum); holding it at 0 also
     // spares evaluate() a lookup. Streams are independent, so skipping one changes no other.
-    const auto& gain_points = prepared.spec->transistor.hfe_min;
     std::array<bool, yield_input_count> varies{};
     varies[static_cast<std::size_t>(YieldInput::supply)] = box.vs_lo_v != box.vs_hi_v;
     varies[static_cast<std::size_t>(YieldInput::ambient)] = box.ta_lo_c != box.ta_hi_c;
@@ -152,12 +155,33 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
     varies[static_cast<std::size_t>(YieldInput::coil_resistance)] = box.r_coil_lo_ohm != box.r_coil_hi_ohm;
     varies[static_cast<std::size_t>(YieldInput::base_resistor)] = box.rb_lo_factor != box.rb_hi_factor;
     varies[static_cast<std::size_t>(YieldInput::zener)] = box.vz_lo_v != box.vz_hi_v;
-    varies[static_cast<std::size_t>(YieldInput::gain)] =
-        std::any_of(gain_points.begin(), gain_points.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
+    varies[static_cast<std::size_t>(YieldInput::clamp_resistor)] = box.rs_lo_factor != box.rs_hi_factor;
+    if (const Bipolar* b = prepared.spec->bipolar()) {
+        varies[static_cast<std::size_t>(YieldInput::gain)] =
+            std::any_of(b->hfe_min.begin(), b->hfe_min.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
+    }
+    if (const Mosfet* m = prepared.spec->mosfet()) {
+        varies[static_cast<std::size_t>(YieldInput::rds_on)] =
+            std::any_of(m->rds_on.begin(), m->rds_on.end(), [](const RdsOnPoint& p) { return p.typ_ohm.has_value(); });
+    }
     YieldCounts counts;
+    // The checks that apply to this design: those evaluated at its worst case (whether a check
+    // applies follows from the spec, not from a sample's values) and coil.thermal where the
+    // coil's self-heating can run away in some sample. Only these are tallied.
+    std::array<std::uint8_t, check_count> in_use{};
+    std::size_t n_in_use = 0;
+    {
+        const Evaluation worst = evaluate(prepared, box, rb_ohm, Figures::verdicts);
+        for (std::size_t k = 0; k < check_count; ++k) {
+            const bool thermal = static_cast<CheckId>(k) == CheckId::coil_thermal &&
+                                 prepared.spec->coil.thermal_resistance_k_per_w.has_value();
+            if (worst.checks.values[k].verdict != Verdict::skip || thermal) in_use[n_in_use++] = static_cast<std::uint8_t>(k);
+        }
+    }
     // Samples go a block at a time, input by input: the draws of a block are independent
     // chains the processor overlaps. The positions are those of sample_positions().
     std::array<BandPositions, draw_block> block{};  // inputs that do not vary stay at 0
+    Evaluation e;  // reused: every verdict is written anew by each evaluation
     for (std::uint64_t start = first; start < last; start += draw_block) {
         const auto n = static_cast<std::size_t>(std::min<std::uint64_t>(draw_block, last - start));
         for (std::size_t s = 0; s < yield_input_count; ++s) {
@@ -168,10 +192,11 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
             }
         }
         for (std::size_t j = 0; j < n; ++j) {
-            const Evaluation e = evaluate(prepared, conditions_at(box, block[j]), rb_ohm, Figures::verdicts);
+            evaluate_into(prepared, conditions_at(box, block[j]), rb_ohm, Figures::verdicts, e);
             bool pass = true;
-            for (std::size_t k = 0; k < check_count; ++k) {
-                const Verdict v = e.checks[k].verdict;
+            for (std::size_t m = 0; m < n_in_use; ++m) {
+                const std::size_t k = in_use[m];
+                const Verdict v = e.checks.values[k].verdict;
                 if (v == Verdict::skip) continue;
                 ++counts.evaluated[k];
                 if (v == Verdict::fail) {
@@ -232,7 +257,7 @@ YieldResult run_yield(const Spec& given, const YieldSettings& settings, const Yi
     precompute_logs(spec);
     const Sized design = size_numbers(spec);
     const Prepared prepared = prepare(spec);
-    const double rb_ohm = design.rb_ohm.value_or(0.0);
+    const double rb_ohm = design.r_drive_ohm.value_or(0.0);
     const std::uint64_t total = settings.samples;
     const std::uint64_t chunks = (total + chunk_samples - 1) / chunk_samples;
     const std::uint64_t threads = std::clamp<std::uint64_t>(settings.jobs, 1, std::max<std::uint64_t>(chunks, 1));

@@ -10,8 +10,7 @@
 
 #include <string>
 
-#include "coilfit/sizing.hpp"
-#include "coilfit/spec.hpp"
+#include "coilfit/report.hpp"
 
 namespace coilfit::io {
 
@@ -20,8 +19,9 @@ inline constexpr std::string_view meas_coil_current = "coil_current_on";
 inline constexpr std::string_view meas_peak_collector = "peak_collector";
 inline constexpr std::string_view meas_release_time = "release_time";
 
-// The netlist text for the sized design. Throws InputError when the design cannot be simulated
-// meaningfully: no coil inductance, no clamp, or no base resistor.
-[[nodiscard]] std::string spice_netlist(const Spec& spec, const Sized& sized);
+// The netlist text for the sized design in the report (it sizes nothing again). Throws InputError
+// when the design cannot be simulated meaningfully: no coil inductance, no clamp, or no drive
+// resistor.
+[[nodiscard]] std::string spice_netlist(const SizingReport& report);
 
 }  // namespace coilfit::io

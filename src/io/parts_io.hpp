@@ -1,4 +1,4 @@
-// The parts table on disk: JSON files of records (architecture doc, "Part records").
+// The parts table on disk: JSON files of records, one reader per kind (parts_read.hpp).
 #pragma once
 
 #include <string>
@@ -6,6 +6,7 @@
 
 #include "coilfit/parts.hpp"
 #include "io/json_read.hpp"
+#include "io/parts_read.hpp"
 
 namespace coilfit::io {
 
@@ -34,15 +35,5 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
 // Where the table is read from: --parts, else $COILFIT_PARTS, else the installed data folder
 // (<prefix>/share/coilfit/parts next to the program), else the source tree's parts/.
 [[nodiscard]] std::string resolve_parts_path(const std::string& flag);
-
-// Record readers, shared by the table and by inline parts in a spec.
-[[nodiscard]] Bipolar read_bipolar(ObjectReader& r);
-[[nodiscard]] Diode read_diode(ObjectReader& r);
-[[nodiscard]] Zener read_zener(ObjectReader& r);
-
-// Records back to JSON, values in SI numbers.
-[[nodiscard]] Json to_json(const Bipolar& p);
-[[nodiscard]] Json to_json(const Diode& p);
-[[nodiscard]] Json to_json(const Zener& p);
 
 }  // namespace coilfit::io

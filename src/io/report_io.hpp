@@ -4,14 +4,13 @@
 #include <string>
 
 #include "coilfit/report.hpp"
-#include "coilfit/spec.hpp"
 #include "io/json_read.hpp"
 
 namespace coilfit::io {
 
 inline constexpr std::string_view report_schema = "coilfit.report/1";
 
-[[nodiscard]] Json report_to_json(const SizingReport& report, const Spec& spec);
+[[nodiscard]] Json report_to_json(const SizingReport& report);
 
 struct TextStyle {
     bool color = false;       // ANSI colours: only on a terminal, never with NO_COLOR
@@ -21,6 +20,6 @@ struct TextStyle {
 // Colours a verdict word (pass green, warn yellow, fail red, skip dim) when style.color.
 [[nodiscard]] std::string paint(std::string_view text, Verdict verdict, const TextStyle& style);
 
-[[nodiscard]] std::string render_text(const SizingReport& report, const Spec& spec, const TextStyle& style);
+[[nodiscard]] std::string render_text(const SizingReport& report, const TextStyle& style);
 
 }  // namespace coilfit::io

@@ -12,7 +12,8 @@ Json number_or_null(const std::optional<double>& v) {
 
 }  // namespace
 
-Json report_to_json(const SizingReport& report, const Spec& spec) {
+Json report_to_json(const SizingReport& report) {
+    const Spec& spec = report.spec;
     Json j;
     j["schema"] = report_schema;
     j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
@@ -33,6 +34,9 @@ Json report_to_json(const SizingReport& report, const Spec& spec) {
         cj["unit"] = unit_symbol(c.unit);
         cj["margin"] = number_or_null(c.margin);
         cj["message"] = c.message;
+        if (c.verdict == Verdict::skip) cj["reason"] = c.reason;
+        else cj["corner"] = c.corner == Corner::cold ? "cold" : "hot";
+        if (c.beyond_data) cj["beyond_data"] = true;
         checks.push_back(cj);
     }
     j["checks"] = checks;
@@ -46,16 +50,21 @@ Json report_to_json(const SizingReport& report, const Spec& spec) {
         oj["release_time_s"] = number_or_null(o.release_time_s);
         oj["clamp_energy_j"] = o.clamp_energy_j;
         oj["within_rating"] = o.within_rating;
+        if (!o.failed_check.empty()) oj["fails"] = o.failed_check;
         oj["chosen"] = o.chosen;
         options.push_back(oj);
     }
-    Json resistor;
-    resistor["value_ohm"] = number_or_null(report.resistor.value_ohm);
-    resistor["series"] = eseries_name(report.resistor.series);
-    resistor["tolerance"] = report.resistor.tolerance;
-    resistor["power_rating_w"] = report.resistor.power_rating_w;
-    resistor["fixed"] = report.resistor.fixed;
-    j["base_resistor"] = resistor;
+    const ResistorReport& rr = report.resistor;
+    if (!rr.kind.empty()) {
+        Json resistor;
+        resistor["value_ohm"] = number_or_null(rr.value_ohm);
+        resistor["series"] = eseries_name(rr.series);
+        resistor["tolerance"] = rr.tolerance;
+        if (rr.power_rating_w) resistor["power_rating_w"] = *rr.power_rating_w;
+        resistor["fixed"] = rr.fixed;
+        j[rr.kind == "gate resistor" ? "gate_resistor" : "base_resistor"] = resistor;
+    }
+    j["driver"] = transistor_kind_name(spec.transistor);
     j["clamp_options"] = options;
     return j;
 }

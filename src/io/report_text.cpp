@@ -40,7 +40,52 @@ std::string paint(std::string_view text, Verdict verdict, const TextStyle& style
     return std::string(code) + std::string(text) + "\x1b[0m";
 }
 
-std::string render_text(const SizingReport& report, const Spec& spec, const TextStyle& style) {
+namespace {
+
+std::string supply_words(const SupplySpec& s) {
+    if (s.min_v || s.max_v) {
+        return fmt::format("{} to {}{}", qf(s.lo_v(), Unit::volt), qf(s.hi_v(), Unit::volt),
+                           s.voltage_v > 0 ? " (nominal " + qf(s.voltage_v, Unit::volt) + ")" : std::string());
+    }
+    return fmt::format("{} ± {} ({} to {})", qf(s.voltage_v, Unit::volt), qf(s.tolerance, Unit::ratio), qf(s.lo_v(), Unit::volt),
+                       qf(s.hi_v(), Unit::volt));
+}
+
+std::string transistor_words(const Transistor& tr) {
+    if (const auto* t = std::get_if<Bipolar>(&tr)) {
+        return fmt::format("{} ({}, Ic max {}, Vceo {}, {})", display_id(*t), bipolar_kind_name(t->kind), qf(t->ic_max_a, Unit::ampere),
+                           qf(t->vceo_v, Unit::volt), t->package.empty() ? std::string("package not given") : t->package);
+    }
+    if (const auto* m = std::get_if<Mosfet>(&tr)) {
+        return fmt::format("{} (nmos, Id max {}, Vds max {}, Vgs(th) {} to {}, {})", display_id(*m), qf(m->id_max_a, Unit::ampere),
+                           qf(m->vds_max_v, Unit::volt), qf(m->vgs_th_min_v, Unit::volt), qf(m->vgs_th_max_v, Unit::volt),
+                           m->package.empty() ? std::string("package not given") : m->package);
+    }
+    const auto& a = std::get<ArrayPart>(tr);
+    return fmt::format("{} (array channel, {} channels, Ic max {} each, Vceo {}, input {})", display_id(a), a.channels,
+                       qf(a.ic_max_a, Unit::ampere), qf(a.vceo_v, Unit::volt), qf(a.input_resistor_ohm, Unit::ohm));
+}
+
+std::string clamp_words(const ClampSpec& c) {
+    const std::string diode = c.diode ? display_id(*c.diode) : std::string();
+    switch (c.type) {
+    case ClampType::diode: return "diode " + diode;
+    case ClampType::diode_zener:
+        return fmt::format("diode {} + zener {} ({} ± {})", diode, display_id(*c.zener), qf(c.zener->vz_v, Unit::volt),
+                           qf(c.zener->tolerance, Unit::ratio));
+    case ClampType::diode_resistor: return fmt::format("diode {} + {} resistor", diode, qf(c.resistor_ohm.value_or(0), Unit::ohm));
+    case ClampType::diode_tvs:
+        return fmt::format("diode {} + TVS {} (breakdown {} to {})", diode, display_id(*c.tvs), qf(c.tvs->vbr_min_v, Unit::volt),
+                           qf(c.tvs->vbr_max_v, Unit::volt));
+    case ClampType::none: return "none";
+    }
+    return "none";
+}
+
+}  // namespace
+
+std::string render_text(const SizingReport& report, const TextStyle& style) {
+    const Spec& spec = report.spec;
     std::string out;
     const auto line = [&](std::string_view label, const std::string& text) {
         out += "  " + pad_right(label, 15) + wrap(text, style.width, 17) + "\n";
@@ -50,16 +95,15 @@ std::string render_text(const SizingReport& report, const Spec& spec, const Text
 
     // --- inputs as understood ---
     out += heading("Inputs as understood");
-    line("supply", fmt::format("{} ± {} ({} to {})", qf(spec.supply.voltage_v, Unit::volt), qf(spec.supply.tolerance, Unit::ratio),
-                               qf(spec.supply.voltage_v * (1 - spec.supply.tolerance), Unit::volt),
-                               qf(spec.supply.voltage_v * (1 + spec.supply.tolerance), Unit::volt)));
+    line("supply", supply_words(spec.supply));
     line("ambient", fmt::format("{} to {}", qf(spec.ambient.min_c, Unit::celsius), qf(spec.ambient.max_c, Unit::celsius)));
     std::string coil = fmt::format("{} rated, {} ± {} at {}; operate {}, release {} of rated",
                                    qf(spec.coil.rated_voltage_v, Unit::volt), qf(spec.coil.resistance_ohm, Unit::ohm),
                                    qf(spec.coil.tolerance, Unit::ratio), qf(spec.coil.reference_temp_c, Unit::celsius),
                                    qf(spec.coil.must_operate, Unit::ratio), qf(spec.coil.must_release, Unit::ratio));
     if (spec.coil.inductance_h) coil += ", L " + qf(*spec.coil.inductance_h, Unit::henry);
-    if (spec.coil.self_heating_k > 0) coil += ", self-heating " + qf(spec.coil.self_heating_k, Unit::kelvin);
+    if (spec.coil.self_heating_k.value_or(0) > 0) coil += ", self-heating " + qf(*spec.coil.self_heating_k, Unit::kelvin);
+    if (spec.coil.thermal_resistance_k_per_w) coil += ", winding " + qf(*spec.coil.thermal_resistance_k_per_w, Unit::kelvin_per_watt);
     if (spec.coil.max_voltage_v) coil += ", max " + qf(*spec.coil.max_voltage_v, Unit::volt);
     if (!spec.coil.preset.empty()) coil += " (preset " + spec.coil.preset + ")";
     line("coil", coil);
@@ -68,23 +112,9 @@ std::string render_text(const SizingReport& report, const Spec& spec, const Text
     if (spec.pin.voh_v) pin += fmt::format(", VOH {} at {}", qf(*spec.pin.voh_v, Unit::volt), qf(spec.pin.voh_current_a.value_or(0), Unit::ampere));
     if (!spec.pin.preset.empty()) pin += " (preset " + spec.pin.preset + ")";
     line("pin", pin);
-    const Bipolar& t = spec.transistor;
-    line("transistor", fmt::format("{} ({}, Ic max {}, Vceo {}, {})", t.id, bipolar_kind_name(t.kind), qf(t.ic_max_a, Unit::ampere),
-                                   qf(t.vceo_v, Unit::volt), t.package.empty() ? std::string("package not given") : t.package));
-    std::string clamp;
-    switch (spec.clamp.type) {
-    case ClampType::diode: clamp = "diode " + spec.clamp.diode->id; break;
-    case ClampType::diode_zener:
-        clamp = fmt::format("diode {} + zener {} ({} ± {})", spec.clamp.diode->id, spec.clamp.zener->id, qf(spec.clamp.zener->vz_v, Unit::volt),
-                            qf(spec.clamp.zener->tolerance, Unit::ratio));
-        break;
-    case ClampType::diode_resistor:
-        clamp = fmt::format("diode {} + {} resistor", spec.clamp.diode->id, qf(spec.clamp.resistor_ohm.value_or(0), Unit::ohm));
-        break;
-    case ClampType::none: clamp = "none"; break;
-    }
-    line("clamp", clamp);
-    if (spec.switching_frequency_hz) line("switching", qf(*spec.switching_frequency_hz, Unit::hertz));
+    line("transistor", transistor_words(spec.transistor));
+    line("clamp", clamp_words(spec.clamp));
+    if (spec.switching.frequency_hz) line("switching", qf(*spec.switching.frequency_hz, Unit::hertz));
     if (spec.load) {
         line("load", fmt::format("{} {}{}", qf(spec.load->voltage_v, Unit::volt), spec.load->kind == LoadKind::ac ? "AC" : "DC",
                                  spec.load->current_a ? ", " + qf(*spec.load->current_a, Unit::ampere) : std::string()));
@@ -93,18 +123,27 @@ std::string render_text(const SizingReport& report, const Spec& spec, const Text
 
     // --- design ---
     out += heading("Design");
-    const ResistorChoice& rc = report.resistor;
-    if (rc.value_ohm) {
-        line("base resistor", fmt::format("{}  ({} series, ± {}, {}){}", qf(*rc.value_ohm, Unit::ohm), eseries_name(rc.series),
-                                          qf(rc.tolerance, Unit::ratio), qf(rc.power_rating_w, Unit::watt),
-                                          rc.fixed ? ", fixed by the spec" : ", largest that saturates"));
+    const ResistorReport& rc = report.resistor;
+    if (rc.kind.empty()) {
+        line("input", "built into the array (no resistor to choose)");
+    } else if (rc.value_ohm) {
+        line(std::string(rc.kind), fmt::format("{}  ({} series, ± {}{}){}", qf(*rc.value_ohm, Unit::ohm), eseries_name(rc.series),
+                                         qf(rc.tolerance, Unit::ratio), rc.power_rating_w ? ", " + qf(*rc.power_rating_w, Unit::watt) : std::string(),
+                                         rc.fixed ? ", fixed by the spec"
+                                         : rc.kind == "base resistor" ? ", largest that saturates"
+                                                                      : ", smallest the pin can carry"));
     } else {
-        line("base resistor", fmt::format("none of the {} series works (see checks)", eseries_name(rc.series)));
+        line(std::string(rc.kind), fmt::format("none of the {} series works (see checks)", eseries_name(rc.series)));
     }
     if (auto lo = report.quantity("base_resistor_min_ohm"), hi = report.quantity("base_resistor_max_ohm"); lo && hi) {
         line("window", fmt::format("{} (pin limit) to {} (saturation)", qf(*lo, Unit::ohm), qf(*hi, Unit::ohm)));
     }
-    line("pull-down", spec.pulldown_ohm ? qf(*spec.pulldown_ohm, Unit::ohm) : std::string("none (see notes)"));
+    if (spec.mosfet()) {
+        line("pull-down", qf(spec.pulldown_ohm.value_or(defaults::nmos_pulldown_ohm), Unit::ohm) +
+                              (spec.pulldown_ohm ? std::string() : std::string(" (default)")));
+    } else if (spec.bipolar()) {
+        line("pull-down", spec.pulldown_ohm ? qf(*spec.pulldown_ohm, Unit::ohm) : std::string("none (see notes)"));
+    }
     out += "\n";
 
     // --- checks ---

@@ -6,6 +6,7 @@
 #include "coilfit/spec.hpp"
 #include "io/json_read.hpp"
 #include "io/parts_io.hpp"
+#include "io/sections_read.hpp"
 
 namespace coilfit::io {
 
@@ -30,11 +31,6 @@ void set_field(SpecDocument& d, const std::string& dotted_path, Json value, cons
 
 // Validates the document against the schema and resolves parts and presets from the table.
 [[nodiscard]] Spec read_spec(const SpecDocument& d, const PartsTable& table);
-
-// Checks the fields of a coil or pin preset as a spec reads them, except that fields a spec
-// must give may be left to the spec; the parts table calls it so that a bad preset rejects the
-// table when it is loaded, naming the table file and the record.
-void check_preset_fields(const Json& fields, const std::string& kind, const Origin& origin, const std::string& path);
 
 // The resolved spec, all values in SI numbers (the report's "input").
 [[nodiscard]] Json spec_to_json(const Spec& spec);

@@ -56,7 +56,7 @@ constexpr std::uint64_t yield_batch = 1U << 16;
 
 void bm_evaluate(benchmark::State& state) {
     const Fixture& f = fixture();
-    const double rb = f.design.rb_ohm.value_or(0.0);
+    const double rb = f.design.r_drive_ohm.value_or(0.0);
     for (auto _ : state) {
         Evaluation e = evaluate(f.prepared, f.design.conditions, rb);
         benchmark::DoNotOptimize(e);
@@ -68,7 +68,7 @@ void bm_yield(benchmark::State& state, Distribution distribution) {
     const Fixture& f = fixture();
     YieldSettings settings;
     settings.distribution = distribution;
-    const double rb = f.design.rb_ohm.value_or(0.0);
+    const double rb = f.design.r_drive_ohm.value_or(0.0);
     std::uint64_t first = 0;
     for (auto _ : state) {
         YieldCounts c = count_samples(f.prepared, f.design.conditions, rb, settings, first, first + yield_batch);

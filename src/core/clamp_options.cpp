@@ -1,0 +1,87 @@
+// The clamp trade-off table: the spec's diode alone, with its resistor, and with the highest
+// zeners of the table that keep the collector within its rating, side by side
+// (docs/method.md "Clamp (flyback) and timing": faster release costs collector voltage).
+#include <algorithm>
+#include <cmath>
+
+#include "report_parts.hpp"
+
+namespace coilfit::report {
+namespace {
+
+std::string q(double value, Unit unit) { return format_quantity(value, unit); }
+
+ClampOption option_for(const Spec& spec, const Sized& sized, ClampSpec clamp, std::string label, bool chosen) {
+    Spec s = spec;
+    s.clamp = clamp;
+    const Evaluation e = evaluate(s, worst_case_conditions(s), sized.r_drive_ohm.value_or(0.0));
+    ClampOption o;
+    o.label = std::move(label);
+    o.clamp = std::move(clamp);
+    o.peak_collector_v = e.peak_collector_voltage_v();
+    if (e.clamp.at[0].has_timing) o.release_time_s = e.release_time_s();
+    o.clamp_energy_j = std::max(e.clamp.at[0].energy_j, e.clamp.at[1].energy_j);
+    o.within_rating = o.peak_collector_v <= e.driver.peak_limit_v;
+    if (!o.within_rating) o.failed_check = "transistor.voltage";
+    o.chosen = chosen;
+    return o;
+}
+
+}  // namespace
+
+std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalogue, const Sized& sized) {
+    std::vector<ClampOption> out;
+    if (!spec.coil.inductance_h || !spec.clamp.diode) return out;
+    const double derated = sized.worst.driver.peak_limit_v;
+    ClampSpec plain;
+    plain.type = ClampType::diode;
+    plain.diode = spec.clamp.diode;
+    out.push_back(option_for(spec, sized, plain, "diode " + display_id(*spec.clamp.diode), spec.clamp.type == ClampType::diode));
+    if (spec.clamp.type == ClampType::diode_resistor) {
+        out.push_back(option_for(spec, sized, spec.clamp, "diode + " + q(spec.clamp.resistor_ohm.value_or(0), Unit::ohm) + " resistor",
+                                 true));
+    }
+    // The highest zeners of the table that keep the collector within the derated rating.
+    const double i0 = sized.worst.coil_current_max_a();
+    std::vector<const Zener*> fitting;
+    for (const Zener& z : catalogue.zeners) {
+        ClampSpec zc;
+        zc.type = ClampType::diode_zener;
+        zc.diode = spec.clamp.diode;
+        zc.zener = z;
+        Conditions c = sized.conditions;
+        c.vz_lo_v = z.vz_v * (1 - z.tolerance);
+        c.vz_hi_v = z.vz_v * (1 + z.tolerance);
+        const ClampVoltages v = clamp_voltages(zc, i0, c);
+        if (sized.conditions.vs_hi_v + v.peak_v <= derated) fitting.push_back(&z);
+    }
+    std::stable_sort(fitting.begin(), fitting.end(), [](const Zener* a, const Zener* b) { return a->vz_v > b->vz_v; });
+    // One per voltage, three at most, listed from low to high.
+    std::vector<const Zener*> shown;
+    for (const Zener* z : fitting) {
+        if (shown.size() >= 3) break;
+        if (std::none_of(shown.begin(), shown.end(), [&](const Zener* s) { return std::abs(s->vz_v - z->vz_v) < 1e-9; })) {
+            shown.push_back(z);
+        }
+    }
+    std::reverse(shown.begin(), shown.end());
+    const bool spec_zener = spec.clamp.type == ClampType::diode_zener && spec.clamp.zener;
+    bool spec_zener_shown = false;
+    for (const Zener* z : shown) {
+        ClampSpec zc;
+        zc.type = ClampType::diode_zener;
+        zc.diode = spec.clamp.diode;
+        zc.zener = *z;
+        const bool chosen = spec_zener && spec.clamp.zener->id == z->id && !spec.clamp.zener->inline_record;
+        spec_zener_shown = spec_zener_shown || chosen;
+        out.push_back(option_for(spec, sized, zc, "diode + zener " + z->id + " (" + q(z->vz_v, Unit::volt) + ")", chosen));
+    }
+    if (spec_zener && !spec_zener_shown) {
+        out.push_back(option_for(spec, sized, spec.clamp,
+                                 "diode + zener " + display_id(*spec.clamp.zener) + " (" + q(spec.clamp.zener->vz_v, Unit::volt) + ")",
+                                 true));
+    }
+    return out;
+}
+
+}  // namespace coilfit::report

@@ -1,0 +1,149 @@
+// The report's notes (defaults used, points outside a part's data, advice) and cautions.
+#include <algorithm>
+#include <cmath>
+
+#include "report_parts.hpp"
+
+namespace coilfit::report {
+namespace {
+
+std::string q(double value, Unit unit) { return format_quantity(value, unit); }
+std::string n(double value) { return format_quantity(value, Unit::number); }
+
+// Extra-low voltage limits: 50 V AC, 120 V ripple-free DC (IEC 61140 / IEC 60364 ELV bands).
+constexpr double elv_ac_v = 50.0;
+constexpr double elv_dc_v = 120.0;
+
+void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Sized& sized, const BipolarFigures& f) {
+    const Bipolar& tr = *spec.bipolar();
+    const BipolarCorner& k = f.at[static_cast<std::size_t>(sized.worst.check(CheckId::transistor_saturation).corner)];
+    const std::string at = " at " + q(k.current_a, Unit::ampere);
+    notes.push_back("a transistor on this pin needs hFE min of at least " + n(k.hfe_needed) + at + " (overdrive " +
+                    n(spec.policy.overdrive) + " x coil current / pin limit " + q(spec.pin.max_current_a, Unit::ampere) + ")");
+    if (!spec.policy.forced_gain && tr.kind == BipolarKind::darlington) {
+        notes.push_back("forced gain taken from the Darlington's Vce(sat) test ratio, " + n(k.forced_gain_policy) + ", instead of 10");
+    }
+    const std::string id = display_id(tr);
+    if (k.hfe_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s hFE points; the nearest point was used");
+    if (k.vce_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s Vce(sat) points; the nearest point was used");
+    if (k.vbe_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s Vbe(sat) points; the nearest point was used");
+    if (k.vce_sat_not_guaranteed) {
+        notes.push_back("Vce(sat) is specified at Ic/Ib = " + n(k.vce_sat_test_ratio) + "; the drive target " + n(k.beta_target) +
+                        " is looser, so the coil voltage figure is not guaranteed; set policy.forced_gain to " +
+                        n(k.vce_sat_test_ratio) + " for a guaranteed Vce(sat)");
+    }
+    if (!spec.pulldown_ohm) {
+        const double rb = sized.r_drive_ohm.value_or(10e3);
+        const double suggested = eseries_nearest(std::clamp(10.0 * rb, 10e3, 100e3), ESeries::e12).value_or(47e3);
+        notes.push_back("no base-emitter pull-down: while the pin floats during reset the transistor may conduct; fit about " +
+                        q(suggested, Unit::ohm) + " from base to emitter and give it as pulldown (it takes Vbe/Rbe from the base drive)");
+    }
+    if (!sized.r_drive_ohm) {
+        notes.push_back("no value of the " + std::string(eseries_name(spec.base_resistor.series)) +
+                        " series is at most the largest base resistor that saturates (" + q(f.window_max_ohm, Unit::ohm) + ")");
+    } else if (!sized.resistor_fixed && *sized.r_drive_ohm < f.window_min_ohm) {
+        notes.push_back("no base resistor works: the transistor needs at most " + q(f.window_max_ohm, Unit::ohm) +
+                        " but the pin needs at least " + q(f.window_min_ohm, Unit::ohm));
+    }
+}
+
+void mosfet_notes(std::vector<std::string>& notes, const Spec& spec, const MosfetFigures& f) {
+    const Mosfet& m = *spec.mosfet();
+    if (!spec.pulldown_ohm) {
+        notes.push_back("gate pull-down taken as " + q(f.pulldown_ohm, Unit::ohm) +
+                        " (default): it holds the gate low while the pin floats during reset; give pulldown to change it");
+    }
+    if (f.gate_time_s && *f.gate_time_s > defaults::slow_gate_s) {
+        notes.push_back("the gate takes about " + q(*f.gate_time_s, Unit::second) +
+                        " to pass its plateau: slow edges heat the part at high switching rates; a smaller gate resistor "
+                        "or a pin with more current shortens them");
+    } else if (!f.gate_time_s) {
+        notes.push_back("the pin's lowest VDD does not pass the gate's plateau (about " + q(f.vplateau_v, Unit::volt) +
+                        "): the gate switching time is not estimated");
+    }
+    const auto& a = f.at;
+    if (a[0].rds_beyond || a[1].rds_beyond) {
+        notes.push_back("the coil current is above the test current of " + display_id(m) +
+                        "'s Rds(on) point; Rds(on) rises with current beyond it");
+    }
+}
+
+}  // namespace
+
+std::vector<std::string> notes(const Spec& spec, const Sized& sized) {
+    const Evaluation& e = sized.worst;
+    std::vector<std::string> out;
+    for (const std::string& d : spec.defaults_used) out.push_back("default used: " + d);
+    if (!spec.coil.self_heating_k && !spec.coil.thermal_resistance_k_per_w) {
+        out.emplace_back("coil self-heating taken as 0 K: the hot coil needs more voltage to operate; ask the maker "
+                         "for the winding temperature rise, or measure it, and give coil.self_heating");
+    }
+    if (const auto* b = std::get_if<BipolarFigures>(&e.drive)) bipolar_notes(out, spec, sized, *b);
+    if (const auto* m = std::get_if<MosfetFigures>(&e.drive)) mosfet_notes(out, spec, *m);
+    if (e.clamp.at[0].v.vf_outside && spec.clamp.diode) {
+        out.push_back("the coil current at " + q(e.clamp.at[0].i0_a, Unit::ampere) + " lies outside " +
+                      display_id(*spec.clamp.diode) + "'s forward-voltage points; the nearest point was used");
+    }
+    if (!spec.coil.inductance_h) {
+        out.emplace_back("no coil inductance: release time and clamp energy are not estimated; measure the coil with an LCR "
+                         "meter with the armature held in its energised position, or ask the maker, and give coil.inductance");
+    }
+    if (spec.clamp.type == ClampType::diode_resistor) {
+        out.push_back("the clamp resistor's power is checked against its rating " + q(spec.clamp.resistor_power_w, Unit::watt) +
+                      " derated by policy.power_derating");
+    }
+    return out;
+}
+
+std::vector<std::string> cautions(const Spec& spec) {
+    std::vector<std::string> out;
+    out.emplace_back("figures are worst-case estimates from datasheet limits; the shipped parts table holds values "
+                     "from memory: confirm every part against the datasheet in use and the design on the bench; "
+                     "wiring to mains follows local electrical codes and licensed practice");
+    const std::string contact_rules =
+        "keep creepage and clearance between the coil circuit and the contacts, fuse the load, enclose live parts, "
+        "and follow local electrical codes and licensed practice";
+    if (spec.load) {
+        const bool hazardous = spec.load->kind == LoadKind::ac ? spec.load->voltage_v > elv_ac_v : spec.load->voltage_v > elv_dc_v;
+        if (hazardous) {
+            out.push_back("the contacts switch " + q(spec.load->voltage_v, Unit::volt) +
+                          (spec.load->kind == LoadKind::ac ? " AC" : " DC") + ", above extra-low voltage: hazardous; " +
+                          contact_rules);
+        }
+    } else {
+        out.push_back("if the contacts switch mains or any voltage above extra-low voltage (50 V AC, 120 V DC): " + contact_rules);
+    }
+    return out;
+}
+
+ResistorReport resistor_report(const Spec& spec, const Sized& sized) {
+    ResistorReport r;
+    r.value_ohm = sized.r_drive_ohm;
+    r.fixed = sized.resistor_fixed;
+    if (spec.bipolar()) {
+        r.kind = "base resistor";
+        r.series = spec.base_resistor.series;
+        r.tolerance = spec.base_resistor.tolerance;
+        r.power_rating_w = spec.base_resistor.power_rating_w;
+        const auto& f = std::get<BipolarFigures>(sized.worst.drive);
+        r.window_min_ohm = f.window_min_ohm;
+        r.window_max_ohm = f.window_max_ohm;
+    } else if (spec.mosfet()) {
+        r.kind = "gate resistor";
+        r.series = spec.gate_resistor.series;
+        r.tolerance = spec.gate_resistor.tolerance;
+        r.window_min_ohm = std::get<MosfetFigures>(sized.worst.drive).gate_resistor_min_ohm;
+    } else {
+        r.kind = "";
+    }
+    return r;
+}
+
+bool shows_skipped(CheckId id, const Spec& spec) {
+    switch (id) {
+    case CheckId::coil_thermal: return spec.coil.thermal_resistance_k_per_w.has_value();
+    default: return false;
+    }
+}
+
+}  // namespace coilfit::report
