@@ -47,7 +47,10 @@ coilfit_cli_case(parts-bad-path 2 ARGS parts --parts /nonexistent STDERR_EXACT "
 coilfit_cli_case(pick-passes 0 ARGS pick ${ex}/greenhouse-valve.json --top 3 STDOUT_MATCH "combinations pass at worst case")
 coilfit_cli_case(pick-json 0 ARGS pick ${ex}/greenhouse-valve.json --format json --top 2
   STDOUT_MATCH "\"candidates\": \\[.*\"worst_margin\"")
-coilfit_cli_case(pick-nothing 1 ARGS pick ${ex}/garage-door.json --pin-max-current 0.5mA STDOUT_MATCH "Nothing passes")
+coilfit_cli_case(pick-nothing 1 ARGS pick ${ex}/garage-door.json --supply 6V STDOUT_MATCH "Nothing passes")
+# The 4 mA pin of the garage door cannot drive a bipolar base, but a logic-level MOSFET passes.
+coilfit_cli_case(pick-garage-door-mosfet 0 ARGS pick ${ex}/garage-door.json --format json
+  STDOUT_MATCH "\"driver\": \"nmos\",[^}]*\"gate_resistor_ohm\": [0-9.]+,[^}]*\"verdict\": \"pass\"")
 
 # --output writes the report whole; a failed run leaves no file behind.
 add_test(NAME cli.output-atomic
