@@ -81,6 +81,26 @@ const char* door_contactor_zener = R"({ "schema": "coilfit.spec/1", "name": "gar
   "pin": { "preset": "cmos-5v-4ma" }, "transistor": "TIP120",
   "clamp": { "type": "diode_zener", "diode": "1N4001", "zener": "1N4744A" }, "pulldown": "10k" })";
 
+// Logic-level N-MOSFET drivers (issue: nmos cross-check), designs of our own:
+// 12 V greenhouse vent relay, 270 ohm, 0.54 H, on a 3.3 V pin through a SOT-23 30 V part.
+const char* vent_relay_nmos = R"({ "schema": "coilfit.spec/1", "name": "greenhouse vent relay, nmos",
+  "supply": { "voltage": "12V", "tolerance": "10%" }, "ambient": { "min": "-10C", "max": "55C" },
+  "coil": { "rated_voltage": "12V", "resistance": "270R", "tolerance": "10%", "inductance": "0.54H" },
+  "pin": { "preset": "cmos-3v3-8ma" }, "transistor": "nmos-sot23-30v-4a",
+  "clamp": { "type": "diode", "diode": "1N4148" } })";
+// 24 V poultry-house vent solenoid, 48 ohm, 0.4 H, a DPAK logic-level part, diode + 12 V zener.
+const char* poultry_solenoid_nmos = R"({ "schema": "coilfit.spec/1", "name": "poultry-house vent solenoid, nmos",
+  "supply": { "voltage": "24V", "tolerance": "10%" }, "ambient": { "min": "-5C", "max": "45C" },
+  "coil": { "rated_voltage": "24V", "resistance": "48R", "tolerance": "7%", "inductance": "0.4H" },
+  "pin": { "preset": "cmos-5v-20ma" }, "transistor": "nmos-dpak-logic-60v-30a",
+  "clamp": { "type": "diode_zener", "diode": "1N4004", "zener": "1N4742A" } })";
+// 5 V lab valve pilot relay, 70 ohm, 0.2 H, on a BSS138 from a 5 V pin, Schottky clamp.
+const char* lab_relay_nmos = R"({ "schema": "coilfit.spec/1", "name": "lab valve pilot relay, nmos",
+  "supply": { "voltage": "5V", "tolerance": "5%" }, "ambient": { "min": "10C", "max": "40C" },
+  "coil": { "rated_voltage": "5V", "resistance": "70R", "tolerance": "10%", "inductance": "0.2H" },
+  "pin": { "preset": "cmos-5v-20ma" }, "transistor": "BSS138",
+  "clamp": { "type": "diode", "diode": "1N5819" } })";
+
 bool ngspice_found() { return std::system("command -v ngspice > /dev/null 2>&1") == 0; }
 
 // Runs `ngspice -b` on the netlist and returns its .meas results by name.
@@ -181,6 +201,18 @@ TEST_SUITE("spice") {
 
     TEST_CASE("ngspice agrees with the report for a 24 V 150 ohm 5 H contactor with a diode and a 15 V zener") {
         check_design(door_contactor_zener, "door-zener");
+    }
+
+    TEST_CASE("ngspice agrees with the report for a 12 V relay on a logic-level MOSFET and a 3.3 V pin") {
+        check_design(vent_relay_nmos, "vent-nmos");
+    }
+
+    TEST_CASE("ngspice agrees with the report for a 24 V solenoid on a DPAK MOSFET with a diode and a 12 V zener") {
+        check_design(poultry_solenoid_nmos, "poultry-nmos");
+    }
+
+    TEST_CASE("ngspice agrees with the report for a 5 V relay on a BSS138 with a Schottky diode") {
+        check_design(lab_relay_nmos, "lab-nmos");
     }
 
     TEST_CASE("ngspice agrees with the report for every example with a coil inductance") {

@@ -65,6 +65,7 @@ struct ClampCorner {
     bool has_timing = false;       // inductance given and the clamp limits the voltage
     double release_time_s = 0, current_zero_time_s = 0, charge_c = 0;  // timing corner
     double energy_j = 0, charge_peak_c = 0;                            // energy corner
+    double avalanche_j = 0;        // no clamp, a MOSFET rated for it: the energy per turn-off
     bool has_rate = false;         // and a switching frequency
     double clamp_power_w = 0, diode_average_current_a = 0, zener_power_w = 0, resistor_power_w = 0;
 };
@@ -76,6 +77,9 @@ struct ClampFigures {
 
 // How the diode.current check came out (CheckValue::detail).
 enum class DiodeCurrentCase : std::uint8_t { peak, average };
+// What clamp.pulse compared (CheckValue::detail): a zener's or TVS's peak power against its
+// pulse rating, or, without a clamp, a MOSFET's avalanche energy per turn-off against EAR.
+enum class PulseCase : std::uint8_t { zener, tvs, avalanche };
 
 struct Evaluation;
 [[nodiscard]] std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e);

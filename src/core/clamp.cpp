@@ -6,6 +6,7 @@
 #include <cmath>
 
 #include "clamp_math.hpp"
+#include "coilfit/drivers/mosfet.hpp"
 #include "stages.hpp"
 
 namespace coilfit {
@@ -131,6 +132,19 @@ void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln
     k.release_time_s = 0;
     k.v = clamp_math::voltages(spec.clamp, i0_a, c, ln_i0);
     if (!k.v.limited) {
+        // No clamp: only breakdown limits the voltage. A MOSFET rated for repetitive avalanche
+        // takes E = 1/2 L I0^2 V_BR / (V_BR - Vs_hi) per turn-off against d_P EAR (docs/method.md
+        // "N-MOSFET driver", no clamp); any other switch fails.
+        k.avalanche_j = 0;
+        if (driver.avalanche_j > 0 && spec.coil.inductance_h) {
+            k.avalanche_j = avalanche_energy_j(*spec.coil.inductance_h, i0_a, driver.rated_voltage_v, c.vs_hi_v);
+            CheckValue pulse = std::isfinite(k.avalanche_j) ? at_most(k.avalanche_j, spec.policy.power_derating * driver.avalanche_j)
+                                                            : failed_without_value(spec.policy.power_derating * driver.avalanche_j);
+            pulse.detail = static_cast<std::uint8_t>(PulseCase::avalanche);
+            checks.set(CheckId::clamp_pulse, pulse);
+            k.peak_collector_v = driver.rated_voltage_v;
+            return;  // transistor.voltage: the drain avalanches by design (skipped, with its reason)
+        }
         checks.set(CheckId::transistor_voltage, failed_without_value(driver.peak_limit_v));
         return;
     }

@@ -45,6 +45,14 @@ std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, con
         }
         return "the diode takes the whole coil current " + q(c.value, Unit::ampere) + " at turn-off against its peak rating " +
                q(c.limit, Unit::ampere) + (ok ? std::string() : ": use a diode with a higher peak current rating");
+    case CheckId::clamp_pulse:
+        if (c.detail == static_cast<std::uint8_t>(PulseCase::avalanche)) {
+            if (!c.has_value) return "no clamp and the supply reaches the MOSFET's Vds max: it avalanches with no limit; fit a clamp";
+            return "no clamp: each turn-off drives " + q(c.value, Unit::joule) + " of avalanche energy into the MOSFET against " +
+                   q(c.limit, Unit::joule) + " (" + q(p.power_derating, Unit::ratio) + " of its repetitive rating EAR)" +
+                   (ok ? std::string("; a clamp diode is still the gentler choice") : std::string(": fit a clamp diode across the coil"));
+        }
+        return {};
     case CheckId::clamp_power:
         return "the clamp dissipates " + q(c.value, Unit::watt) + " on average at " +
                q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + " against " + q(c.limit, Unit::watt) +
@@ -55,6 +63,9 @@ std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, con
 
 std::string clamp_skip_reason(CheckId id, const Spec& spec) {
     switch (id) {
+    case CheckId::transistor_voltage:
+        return "not checked: without a clamp the drain avalanches at its breakdown; clamp.pulse checks the energy "
+               "against the part's avalanche rating";
     case CheckId::diode_voltage:
     case CheckId::diode_current: return "not checked: there is no clamp diode";
     case CheckId::clamp_power:

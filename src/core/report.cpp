@@ -42,7 +42,7 @@ std::string check_skip_reason(CheckId id, const Spec& spec) {
 }
 
 Unit check_unit(CheckId id, const CheckValue& c) {
-    (void)c;
+    if (id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::avalanche)) return Unit::joule;
     return check_info(id).unit;
 }
 

@@ -141,6 +141,8 @@ ResistorReport resistor_report(const Spec& spec, const Sized& sized) {
 
 bool shows_skipped(CheckId id, const Spec& spec) {
     switch (id) {
+    case CheckId::clamp_pulse:
+        return spec.clamp.type == ClampType::none && spec.mosfet() && spec.mosfet()->ear_j.has_value();
     case CheckId::coil_thermal: return spec.coil.thermal_resistance_k_per_w.has_value();
     default: return false;
     }

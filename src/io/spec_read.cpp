@@ -120,7 +120,33 @@ SpecDocument flags_only_document() {
     return d;
 }
 
+namespace {
+
+// A flag that changes the clamp's type replaces the file's type-specific fields instead of
+// tripping over them ("--clamp none" on a file that names a diode): fields the new type does
+// not take are dropped unless a flag of this run set them.
+void prune_clamp_fields(SpecDocument& d, const std::string& type) {
+    Json* clamp = d.doc.contains("clamp") && d.doc["clamp"].is_object() ? &d.doc["clamp"] : nullptr;
+    if (!clamp) return;
+    auto keeps = [&type](const std::string& key) {
+        if (key == "type") return true;
+        if (key == "diode") return type != "none";
+        if (key == "zener") return type == "diode_zener";
+        if (key == "tvs") return type == "diode_tvs";
+        if (key == "resistor" || key == "resistor_tolerance" || key == "resistor_power") return type == "diode_resistor";
+        return true;
+    };
+    std::vector<std::string> drop;
+    for (const auto& [key, value] : clamp->items()) {
+        if (!keeps(key) && d.origin.flags.count("clamp." + key) == 0) drop.push_back(key);
+    }
+    for (const auto& key : drop) clamp->erase(key);
+}
+
+}  // namespace
+
 void set_field(SpecDocument& d, const std::string& dotted_path, Json value, const std::string& flag) {
+    if (dotted_path == "clamp.type" && value.is_string()) prune_clamp_fields(d, value.get<std::string>());
     Json* node = &d.doc;
     std::size_t start = 0;
     std::string path;
