@@ -2,7 +2,7 @@
 set(rc_script ${CMAKE_CURRENT_SOURCE_DIR}/run_case.cmake)
 set(ex ${COILFIT_EXAMPLES_DIR})
 set(one_shot size --supply 12V --coil-resistance 400R --coil-voltage 12V --pin-vdd 3.3V
-    --pin-max-current 8mA --transistor 2N4401 --diode 1N4148)
+    --pin-max-current 8mA --transistor 2N4401 --diode 1N4148 --ambient-max 50C)
 
 function(coilfit_cli_case name rc)
   cmake_parse_arguments(A "" "STDOUT_MATCH;STDERR_MATCH;STDERR_EXACT;INPUT;STDOUT_NOT_MATCH" "ARGS" ${ARGN})
@@ -57,3 +57,9 @@ add_test(NAME cli.output-atomic
   COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DEX=${ex} -DOUT=${CMAKE_CURRENT_BINARY_DIR}/output-test
           -P ${CMAKE_CURRENT_SOURCE_DIR}/cli_output_check.cmake.in)
 set_tests_properties(cli.output-atomic PROPERTIES ENVIRONMENT "COILFIT_PARTS=${COILFIT_PARTS_DIR}")
+
+# A part run beyond its highest Vce(sat) and hFE points: the checks warn (pass), --strict fails them.
+set(beyond ${CMAKE_CURRENT_SOURCE_DIR}/data/beyond_data.json)
+coilfit_cli_case(beyond-data-warns 0 ARGS size ${beyond} STDOUT_MATCH "beyond the part's data")
+coilfit_cli_case(beyond-data-strict 1 ARGS size ${beyond} --strict STDOUT_MATCH "WARN")
+coilfit_cli_case(beyond-data-json 0 ARGS size ${beyond} --format json STDOUT_MATCH "\"beyond_data\": true")

@@ -41,7 +41,7 @@ coilfit_yield_case(fail-text 1 ARGS ${marginal} --samples 20000 --distribution n
   STDOUT_MATCH "normal within the tolerances.*coil.operate")
 # A spec given wholly as flags.
 coilfit_yield_case(one-shot 0 ARGS --supply 12V --coil-resistance 400R --coil-voltage 12V --pin-vdd 3.3V
-  --pin-max-current 8mA --transistor 2N4401 --diode 1N4148 --samples 1000 --format json
+  --pin-max-current 8mA --transistor 2N4401 --diode 1N4148 --ambient-max 50C --samples 1000 --format json
   STDOUT_MATCH "\"pass_rate\": 1\\.0")
 # Bad input exits 2.
 coilfit_yield_case(zero-samples 2 ARGS ${greenhouse} --samples 0 STDERR_MATCH "--samples")

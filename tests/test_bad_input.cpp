@@ -463,7 +463,7 @@ TEST_SUITE("bad input") {
         }
         // No transistor would do: the advice is about the pin, not about more gain.
         CHECK(r.find_check("pin.current")->message ==
-              "the pin's lowest VDD 475 mV does not reach Vbe(sat) 950 mV: no base resistor and no gain can switch this "
+              "the pin's lowest VDD 475 mV does not reach Vbe(sat) 990 mV: no base resistor and no gain can switch this "
               "transistor on; use a pin with a higher supply or a buffer");
         for (const auto& q : r.quantities) CHECK(std::isfinite(q.value));
         const std::string text = io::render_text(r, io::TextStyle{});

@@ -42,6 +42,8 @@ TEST_SUITE("pick") {
                 CAPTURE(c.diode);
                 Spec alone = s.spec;
                 alone.transistor = *s.table.catalogue.find_transistor(c.transistor);
+                // pick gives a transistor of another kind its own kind's forced-gain default.
+                if (transistor_kind_name(alone.transistor) != transistor_kind_name(s.spec.transistor)) alone.policy.forced_gain.reset();
                 if (const ArrayPart* a = alone.array()) {
                     alone.clamp = ClampSpec{};
                     alone.clamp.diode = a->diode;
@@ -63,7 +65,7 @@ TEST_SUITE("pick") {
         }
     }
 
-    TEST_CASE("passing combinations come first, ranked by their smallest margin") {
+    TEST_CASE("passing combinations come first, within their data first, ranked by robustness") {
         const Setup s = load("greenhouse-valve.json");
         const PickResult result = pick(s.spec, s.table.catalogue);
         REQUIRE_FALSE(result.candidates.empty());
@@ -72,11 +74,19 @@ TEST_SUITE("pick") {
         for (std::size_t i = 1; i < result.candidates.size(); ++i) {
             const Candidate& a = result.candidates[i - 1];
             const Candidate& b = result.candidates[i];
-            if (a.verdict == b.verdict) {
-                CHECK(a.worst_margin >= b.worst_margin);
-                if (a.worst_margin == b.worst_margin) CHECK(a.pin_current_max_a <= b.pin_current_max_a);
-            } else {
+            if (a.verdict != b.verdict) {
                 CHECK(a.verdict == Verdict::pass);
+            } else if (a.beyond_data != b.beyond_data) {
+                CHECK_FALSE(a.beyond_data);
+            } else if (a.verdict == Verdict::pass) {
+                // A bipolar design by its window ratio, another by (1 + its smallest margin)^2.
+                const auto r = [](const Candidate& c) {
+                    return c.window_ratio ? *c.window_ratio : (1 + c.worst_margin) * (1 + c.worst_margin);
+                };
+                CHECK(r(a) >= r(b));
+                if (r(a) == r(b)) CHECK(a.margin_other >= b.margin_other);
+            } else {
+                CHECK(a.worst_margin >= b.worst_margin);
             }
         }
     }

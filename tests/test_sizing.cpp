@@ -3,6 +3,7 @@
 #include <doctest/doctest.h>
 
 #include <cmath>
+#include <variant>
 #include <vector>
 
 #include "coilfit/report.hpp"
@@ -89,43 +90,87 @@ TEST_SUITE("sizing") {
         CHECK(test::flat(z.worst).release_current_a == Approx(1.2 / 400.0));
     }
 
-    TEST_CASE("the base resistor is the largest E24 value that saturates at worst case") {
+    TEST_CASE("the base resistor is the largest E24 value that saturates at both ambient corners") {
+        // Hand-worked at -20 °C and 60 °C (docs/method.md "Bipolar drivers", edition 2): at the
+        // cold corner hFE_min falls as (T/298.15 K)^1.5 (from memory: the gain exponent of common
+        // small-signal models) and Vbe(sat) rises 2 mV/K below 25 °C; at the hot corner Vbe low
+        // falls 2 mV/K above 25 °C (common practice, the -2 mV/K junction coefficient).
         const Spec s = hand_spec();
         const Sized z = size_numbers(s);
         const double r_cold = 400.0 * 0.9 * (1.0 + alpha * (-40.0));
         const double i_max = 13.2 / r_cold;            // 0.04344 A
-        const double ib_req = i_max / 10.0;            // forced gain 10 (hFE 100 / 2 = 50 is looser)
-        const double rb_max = (3.3 * 0.95 - 0.9) / ib_req / 1.05;  // VDD low, Vbe(sat), Rb +5 %
+        const double hfe_cold = 100.0 * std::pow(253.15 / 298.15, 1.5);
+        CHECK(hfe_cold == Approx(78.23).epsilon(1e-3));
+        const double vbe_cold = 0.9 + 0.002 * 45.0;    // 0.99 V
+        const double ib_req = i_max / 10.0;            // forced gain 10 (hFE 78.2 / 2 = 39 is looser)
+        const double rb_max = (3.3 * 0.95 - vbe_cold) / ib_req / 1.05;  // VDD low, Vbe(sat) cold, Rb +5 %
         CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
-        // By hand: rb_max = 2.235 / 0.004344 / 1.05 = 490.0 Ω; the E24 value below is 470 Ω.
-        CHECK(rb_max == Approx(490.0).epsilon(0.002));
+        // By hand: rb_max = 2.145 / 0.004344 / 1.05 = 469.6 Ω, just under 470 Ω: the E24 value below is 430 Ω.
+        CHECK(rb_max == Approx(469.56).epsilon(0.002));
         REQUIRE(z.r_drive_ohm.has_value());
-        CHECK(*z.r_drive_ohm == Approx(470.0));
-        // Pin current at the opposite corner: VDD high, Vbe low 0.6 V, Rb -5 %.
-        const double i_pin = (3.3 * 1.05 - 0.6) / (470.0 * 0.95);
+        CHECK(*z.r_drive_ohm == Approx(430.0));
+        // Pin current at the opposite corner: VDD high, Vbe low 0.6 V - 2 mV/K x 35 K at 60 °C, Rb -5 %.
+        const double vbe_low_hot = 0.6 - 0.002 * 35.0;
+        const double i_pin = (3.3 * 1.05 - vbe_low_hot) / (430.0 * 0.95);
         CHECK(test::flat(z.worst).pin_current_max_a == Approx(i_pin));
         CHECK(z.worst.check(CheckId::pin_current).verdict == Verdict::pass);
-        // Lowest base current and the worst forced gain with 470 Ω.
-        const double ib_min = (3.3 * 0.95 - 0.9) / (470.0 * 1.05);
+        CHECK(z.worst.check(CheckId::pin_current).corner == Corner::hot);
+        // Lowest base current and the worst forced gain with 430 Ω, both at the cold corner.
+        const double ib_min = (3.3 * 0.95 - vbe_cold) / (430.0 * 1.05);
         CHECK(test::flat(z.worst).base_current_min_a == Approx(ib_min));
         CHECK(test::flat(z.worst).forced_gain_worst == Approx(i_max / ib_min));
         CHECK(z.worst.check(CheckId::transistor_saturation).verdict == Verdict::pass);
-        // Smallest resistor the pin can carry: (3.465 - 0.6) / (8 mA * 0.95).
-        CHECK(test::flat(z.worst).base_resistor_min_ohm == Approx((3.465 - 0.6) / (0.008 * 0.95)));
+        CHECK(z.worst.check(CheckId::transistor_saturation).corner == Corner::cold);
+        // Smallest resistor the pin can carry: (3.465 - 0.53) / (8 mA * 0.95), the hot corner's.
+        CHECK(test::flat(z.worst).base_resistor_min_ohm == Approx((3.465 - vbe_low_hot) / (0.008 * 0.95)));
+    }
+
+    TEST_CASE("hand-worked corners at -40 °C and 85 °C: gain, Vbe(sat), window, pin current and operate") {
+        // docs/method.md edition 2: hFE x (233.15/298.15)^1.5 = 0.69 at -40 °C (from memory, the
+        // exponent 1.5), Vbe(sat) + 2 mV/K x 65 K = +130 mV; at 85 °C Vbe low 0.6 V - 120 mV.
+        Spec s = hand_spec();
+        s.ambient = {-40.0, 85.0};
+        const Sized z = size_numbers(s);
+        const auto& f = std::get<BipolarFigures>(z.worst.drive);
+        CHECK(f.at[0].hfe_min == Approx(100.0 * std::pow(233.15 / 298.15, 1.5)));
+        CHECK(f.at[0].hfe_min == Approx(69.15).epsilon(1e-3));  // "about two thirds"
+        CHECK(f.at[1].hfe_min == Approx(100.0));                // above 25 °C the 25 °C value is kept
+        CHECK(f.at[0].vbe_sat_v == Approx(0.9 + 0.130));
+        CHECK(f.at[1].vbe_low_v == Approx(0.6 - 0.120));
+        const double i_cold = 13.2 / (360.0 * (1.0 + alpha * (-60.0)));
+        const double i_hot = 13.2 / (360.0 * (1.0 + alpha * 65.0));
+        // The window is the intersection: Rb_max of the cold corner, Rb_min of the hot one.
+        const double rb_max_cold = (3.135 - 1.03) / (i_cold / 10.0) / 1.05;
+        const double rb_max_hot = (3.135 - 0.9) / (i_hot / 10.0) / 1.05;
+        CHECK(f.window_max_ohm == Approx(std::min(rb_max_cold, rb_max_hot)));
+        CHECK(f.window_min_ohm == Approx((3.465 - 0.48) / (0.008 * 0.95)));
+        // Operate: the hot coil at 85 °C needs 9 V x (1 + alpha 65 K); it gets 10.8 V - 0.2 V.
+        CHECK(z.worst.check(CheckId::coil_operate).limit == Approx(9.0 * (1.0 + alpha * 65.0)));
+        CHECK(z.worst.check(CheckId::coil_operate).corner == Corner::hot);
+        // Thermal at the hot corner's current (coil at 85 °C, low tolerance), not the cold coil's.
+        const double ib = (3.465 - 0.48) / (*z.r_drive_ohm * 0.95);
+        const double tj = 85.0 + (0.2 * i_hot + 0.9 * ib) * 200.0;
+        CHECK(z.worst.check(CheckId::transistor_thermal).value == Approx(tj));
     }
 
     TEST_CASE("the pin's output resistance and the pull-down enter the largest resistor") {
         Spec s = hand_spec();
+        s.ambient = {25.0, 25.0};  // device data at their 25 °C values
         s.pin.voh_v = 2.9;
         s.pin.voh_current_a = 0.008;
         s.pulldown_ohm = 47e3;
         const Sized z = size_numbers(s);
-        const double i_max = 13.2 / (360.0 * (1.0 - alpha * 40.0));
-        const double r_out = (3.3 - 2.9) / 0.008;  // Thevenin: (VDD - VOH) / IOH = 50 Ω
+        const double i_max = 13.2 / (360.0 * (1.0 + alpha * 5.0));
+        // Thevenin from the supply VOH is stated at, by default the lowest VDD (docs/method.md
+        // edition 2): (3.135 - 2.9) / 8 mA = 29.4 Ω.
+        const double r_out = (3.135 - 2.9) / 0.008;
         const double rb_max = ((3.135 - 0.9) / (i_max / 10.0 + 0.9 / 47e3) - r_out) / 1.05;
-        CHECK(test::flat(z.worst).pin_r_out_ohm == Approx(50.0));
+        CHECK(test::flat(z.worst).pin_r_out_ohm == Approx(29.375));
         CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
         CHECK(test::flat(z.worst).base_current_min_a == Approx((3.135 - 0.9) / (*z.r_drive_ohm * 1.05 + r_out) - 0.9 / 47e3));
+        // With pin.voh_vdd the resistance is taken from that supply instead.
+        s.pin.voh_vdd_v = 3.3;
+        CHECK(test::flat(size_numbers(s).worst).pin_r_out_ohm == Approx(50.0));
     }
 
     TEST_CASE("with overdrive 5 the minimum gain a pin can serve is 5 I_coil / I_pin") {
@@ -143,7 +188,8 @@ TEST_SUITE("sizing") {
         Spec s = hand_spec();
         s.supply.voltage_v = 5.0;
         s.supply.tolerance = 0.0;
-        s.ambient = {20.0, 20.0};
+        s.ambient = {25.0, 25.0};  // device data at their 25 °C values, coil at its reference
+        s.coil.reference_temp_c = 25.0;
         s.coil.tolerance = 0.0;
         s.coil.rated_voltage_v = 5.0;
         s.coil.resistance_ohm = 70.0;

@@ -8,6 +8,7 @@
 
 #include "coilfit/check.hpp"
 #include "coilfit/corners.hpp"
+#include "coilfit/driver.hpp"
 #include "coilfit/spec.hpp"
 
 namespace coilfit {
@@ -53,7 +54,7 @@ void coil_figures(const Spec& spec, const Conditions& c, bool both, CoilFigures&
 
 // coil.operate (the lowest coil voltage the driver leaves, against the hot must-operate voltage),
 // coil.overvoltage and coil.thermal at one corner.
-void coil_checks(const CoilSpec& coil, const CoilCorner& corner, double coil_voltage_min_v, double coil_voltage_max_v,
+void coil_checks(const CoilSpec& coil, const CoilCorner& corner, const DriverCorner& driver, double coil_voltage_max_v,
                  CheckSet& out);
 
 struct Evaluation;

@@ -7,7 +7,7 @@ namespace coilfit::defaults {
 // Corners
 inline constexpr double supply_tolerance = 0.10;
 inline constexpr double ambient_min_c = 0.0;  // commercial grade (docs/method.md "Corners")
-inline constexpr double ambient_max_c = 50.0;
+inline constexpr double ambient_max_c = 70.0;
 inline constexpr double pin_vdd_tolerance = 0.05;
 
 // Coil (common practice: relay data)

@@ -30,6 +30,7 @@ struct DriverCorner {
     double pin_current_max_a = 0;   // the most the pin sources
     double power_w = 0;             // the switch's dissipation (thermal check's corner)
     double junction_c = 0;          // its junction temperature there
+    bool drop_beyond_data = false;  // the on-state drop came from beyond the part's data (unsafe side)
 };
 
 struct DriverCommon {

@@ -1,7 +1,11 @@
 // Which parts of the table would work? Sizes the spec afresh with every transistor of every
-// driver kind (and, for diode clamps, every diode) and ranks the combinations: passing first,
-// then by the smallest margin over all checks (largest first: the most robust design), then by
-// lower pin current, then by ids, so the order is stable and deterministic.
+// driver kind (and, for diode clamps, every diode) and ranks the combinations (docs/method.md
+// "Bipolar drivers", "Data limits"): passing first; within their data before beyond it; then by
+// robustness, most robust first: a bipolar design by its base resistor window ratio Rb_max/Rb_min
+// and then by the smallest margin of its checks other than saturation (a resistor at the
+// window's edge makes the saturation margin small by construction); a design without a window
+// ranks as the ratio (1 + m)^2 its smallest margin m would give a centred resistor; then by lower
+// pin current, then by ids, so the order is stable and deterministic.
 #pragma once
 
 #include <optional>
@@ -23,6 +27,9 @@ struct Candidate {
     Verdict verdict = Verdict::fail;    // pass | fail
     std::string worst_check;            // id of the check with the smallest margin
     double worst_margin = 0;
+    std::optional<double> window_ratio;  // bipolar: Rb_max / Rb_min
+    double margin_other = 0;            // the smallest margin of the checks other than saturation
+    bool beyond_data = false;           // a check used a part value beyond the part's data
     double pin_current_max_a = 0;
     std::vector<std::string> failed;    // ids of failed checks
 };

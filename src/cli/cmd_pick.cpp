@@ -38,6 +38,8 @@ int run_pick(const PickOptions& options) {
             cj["verdict"] = verdict_name(c.verdict);
             cj["worst_check"] = c.worst_check;
             cj["worst_margin"] = c.worst_margin;
+            cj["window_ratio"] = c.window_ratio ? io::Json(*c.window_ratio) : io::Json(nullptr);
+            cj["beyond_data"] = c.beyond_data;
             cj["family"] = c.family;
             cj["failed_checks"] = c.failed;
             list.push_back(cj);

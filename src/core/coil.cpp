@@ -66,9 +66,12 @@ void coil_figures(const Spec& spec, const Conditions& c, bool both, CoilFigures&
     f.release_current_a = spec.coil.must_release * spec.coil.rated_voltage_v / spec.coil.resistance_ohm;
 }
 
-void coil_checks(const CoilSpec& coil, const CoilCorner& k, double coil_voltage_min_v, double coil_voltage_max_v,
+void coil_checks(const CoilSpec& coil, const CoilCorner& k, const DriverCorner& driver, double coil_voltage_max_v,
                  CheckSet& out) {
-    out.set(CheckId::coil_operate, at_least(coil_voltage_min_v, k.operate_voltage_v));
+    CheckValue op = at_least(driver.coil_voltage_min_v, k.operate_voltage_v);
+    // The direction rule (docs/method.md "Data limits"): a drop taken beyond the part's data.
+    if (driver.drop_beyond_data) mark_beyond_data(op);
+    out.set(CheckId::coil_operate, op);
     if (coil.max_voltage_v) out.set(CheckId::coil_overvoltage, at_most(coil_voltage_max_v, *coil.max_voltage_v));
     if (coil.max_temperature_c) {
         CheckValue t = at_most(k.temp_hot_c, *coil.max_temperature_c);

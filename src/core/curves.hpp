@@ -3,6 +3,7 @@
 // parts.cpp's public functions are these same functions, so every caller gets the same numbers.
 #pragma once
 
+#include <algorithm>
 #include <cmath>
 #include <cstddef>
 
@@ -77,8 +78,27 @@ inline Lookup vbe_sat_at(const Bipolar& part, double ic_a, double ln_ic) {
     return interpolate_log(part.vbe_sat, ic_a, ln_ic, sat_x, sat_ln, sat_y);
 }
 
+// Above its highest point Vf is extrapolated on log(current) from the last two points, or from
+// one point by the diode law with emission coefficient 2, + 2 * 26 mV * ln(I / I_pt) (common
+// practice; docs/method.md "Data limits"); below its lowest point the nearest is used (safe: Vf
+// falls with current).
+inline constexpr double vf_one_point_slope_v = 2.0 * 0.026;
+
 inline Lookup vf_max_at(const Diode& part, double if_a, double ln_if) {
-    return interpolate_log(part.vf, if_a, ln_if, fwd_x, fwd_ln, fwd_y);
+    Lookup l = interpolate_log(part.vf, if_a, ln_if, fwd_x, fwd_ln, fwd_y);
+    if (l.side != Side::above || part.vf.empty()) return l;
+    const double lx = std::isnan(ln_if) ? std::log(if_a) : ln_if;
+    const ForwardPoint& last = part.vf.back();
+    const double l_last = std::isnan(last.ln_if) ? std::log(last.if_a) : last.ln_if;
+    double slope = vf_one_point_slope_v;
+    if (part.vf.size() >= 2) {
+        const ForwardPoint& prev = part.vf[part.vf.size() - 2];
+        const double l_prev = std::isnan(prev.ln_if) ? std::log(prev.if_a) : prev.ln_if;
+        slope = (last.vf_max_v - prev.vf_max_v) / (l_last - l_prev);
+    }
+    l.value = last.vf_max_v + std::max(0.0, slope) * (lx - l_last);
+    l.outside = true;
+    return l;
 }
 
 inline constexpr auto cur_x = [](const CurrentPoint& p) { return p.ic_a; };

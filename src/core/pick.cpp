@@ -44,7 +44,27 @@ Candidate candidate_of(const Spec& trial, const Sized& sized) {
     }
     c.worst_margin = std::isfinite(worst) ? worst : -1.0;
     c.verdict = c.failed.empty() ? Verdict::pass : Verdict::fail;
+    double other = INFINITY;
+    for (std::size_t i = 0; i < check_count; ++i) {
+        const CheckValue& v = e.checks.values[i];
+        if (v.verdict == Verdict::skip) continue;
+        c.beyond_data = c.beyond_data || v.beyond_data;
+        if (static_cast<CheckId>(i) != CheckId::transistor_saturation) other = std::min(other, v.margin());
+    }
+    c.margin_other = std::isfinite(other) ? other : 0.0;
+    if (const auto* b = std::get_if<BipolarFigures>(&e.drive); b && b->window_min_ohm > 0 && b->window_max_ohm > 0) {
+        c.window_ratio = b->window_max_ohm / b->window_min_ohm;
+    }
     return c;
+}
+
+// The ranking's robustness figure: a bipolar design's window ratio, or the ratio a centred
+// resistor would give the others' smallest margin m, (1 + m)^2 (sqrt of the ratio is the
+// headroom on each side of the geometric middle).
+double robustness(const Candidate& c) {
+    if (c.window_ratio) return *c.window_ratio;
+    const double m = std::max(c.worst_margin, -1.0);
+    return (1.0 + m) * (1.0 + m);
 }
 
 }  // namespace
@@ -71,6 +91,11 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
     Spec trial = spec;
     for (Transistor& t : transistors) {
         trial.transistor = std::move(t);
+        // A forced gain written for the spec's own kind of transistor does not carry over: a
+        // Darlington tried for an npn spec (or the other way round) takes its kind's default.
+        trial.policy.forced_gain = transistor_kind_name(trial.transistor) == transistor_kind_name(spec.transistor)
+                                       ? spec.policy.forced_gain
+                                       : std::nullopt;
         precompute_logs(trial);
         // An array channel clamps through its own built-in diode.
         const ArrayPart* array = trial.array();
@@ -92,6 +117,13 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
 
     std::stable_sort(result.candidates.begin(), result.candidates.end(), [](const Candidate& a, const Candidate& b) {
         if (a.verdict != b.verdict) return a.verdict == Verdict::pass;
+        if (a.beyond_data != b.beyond_data) return !a.beyond_data;
+        if (a.verdict == Verdict::pass) {
+            const double ra = robustness(a);
+            const double rb = robustness(b);
+            if (ra != rb) return ra > rb;
+            if (a.margin_other != b.margin_other) return a.margin_other > b.margin_other;
+        }
         if (a.worst_margin != b.worst_margin) return a.worst_margin > b.worst_margin;
         if (a.pin_current_max_a != b.pin_current_max_a) return a.pin_current_max_a < b.pin_current_max_a;
         if (a.transistor != b.transistor) return a.transistor < b.transistor;

@@ -24,13 +24,41 @@ void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Size
         notes.push_back("forced gain taken from the Darlington's Vce(sat) test ratio, " + n(k.forced_gain_policy) + ", instead of 10");
     }
     const std::string id = display_id(tr);
-    if (k.hfe_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s hFE points; the nearest point was used");
-    if (k.vce_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s Vce(sat) points; the nearest point was used");
-    if (k.vbe_lookup.outside) notes.push_back("the operating point" + at + " lies outside " + id + "'s Vbe(sat) points; the nearest point was used");
+    // The direction rule (docs/method.md "Data limits"): below its points Vce(sat) and Vbe(sat)
+    // are on their safe side; beyond them, and hFE on either side, the checks using them warn.
+    if (k.hfe_lookup.side != Side::within) {
+        notes.push_back("the operating point" + at + " lies beyond " + id + "'s hFE points; the nearest point was used, "
+                        "but gain falls off beyond the data: transistor.saturation warns (beyond the part's data)");
+    }
+    if (k.vce_lookup.side == Side::below && k.vce_lookup.outside) {
+        notes.push_back("the operating point" + at + " lies below " + id + "'s Vce(sat) points; the nearest point was used (the safe side)");
+    } else if (k.vce_lookup.side == Side::above) {
+        notes.push_back("the operating point" + at + " lies above " + id + "'s Vce(sat) points; the nearest point was used: "
+                        "coil.operate and transistor.thermal warn (beyond the part's data)");
+    }
+    if (k.vbe_lookup.side == Side::below && k.vbe_lookup.outside) {
+        notes.push_back("the operating point" + at + " lies below " + id + "'s Vbe(sat) points; the nearest point was used (the safe side)");
+    } else if (k.vbe_lookup.side == Side::above) {
+        notes.push_back("the operating point" + at + " lies above " + id + "'s Vbe(sat) points; the nearest point was used: "
+                        "transistor.saturation warns (beyond the part's data)");
+    }
     if (k.vce_sat_not_guaranteed) {
         notes.push_back("Vce(sat) is specified at Ic/Ib = " + n(k.vce_sat_test_ratio) + "; the drive target " + n(k.beta_target) +
                         " is looser, so the coil voltage figure is not guaranteed; set policy.forced_gain to " +
                         n(k.vce_sat_test_ratio) + " for a guaranteed Vce(sat)");
+    }
+    // The 25 °C data corrected at the corners (docs/method.md "Bipolar drivers", Temperature).
+    const BipolarCorner& cold = f.at[0];
+    if (cold.hfe_min < cold.hfe_lookup.value * (1.0 - 1e-12)) {
+        notes.push_back("at the cold corner (" + q(sized.conditions.ta_lo_c, Unit::celsius) + ") the 25 °C data are corrected: hFE min x " +
+                        n(cold.hfe_min / cold.hfe_lookup.value) + " (exponent " +
+                        n(tr.hfe_temp_exponent.value_or(1.5)) + (tr.hfe_temp_exponent ? ", the part's" : ", the default; the part may give hfe_temp_exponent") +
+                        "), Vbe(sat) + " + q(cold.vbe_sat_v - cold.vbe_lookup.value, Unit::volt) + " (2 mV/K)");
+    }
+    const BipolarCorner& hot = f.at[1];
+    if (hot.vbe_low_v < spec.policy.vbe_low_v * (1.0 - 1e-12)) {
+        notes.push_back("at the hot corner (" + q(sized.conditions.ta_hi_c, Unit::celsius) + ") Vbe low falls to " +
+                        q(hot.vbe_low_v, Unit::volt) + " (2 mV/K above 25 °C), which raises the pin current");
     }
     if (!spec.pulldown_ohm) {
         const double rb = sized.r_drive_ohm.value_or(10e3);
@@ -49,6 +77,11 @@ void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Size
 
 void mosfet_notes(std::vector<std::string>& notes, const Spec& spec, const MosfetFigures& f) {
     const Mosfet& m = *spec.mosfet();
+    notes.push_back("the 25 °C data are corrected at the corners: the gate threshold rises " +
+                    q(m.vgs_th_tempco_v_per_k.value_or(defaults::vgs_th_tempco_v_per_k), Unit::volt) + "/K below 25 °C" +
+                    (m.vgs_th_tempco_v_per_k ? "" : " (default, from memory)") + ", Rds(on) rises " +
+                    q(m.rds_on_tempco_per_k.value_or(defaults::rds_on_tempco_per_k), Unit::ratio) + "/K with the junction" +
+                    (m.rds_on_tempco_per_k ? "" : " (default, from memory)"));
     if (!spec.pulldown_ohm) {
         notes.push_back("gate pull-down taken as " + q(f.pulldown_ohm, Unit::ohm) +
                         " (default): it holds the gate low while the pin floats during reset; give pulldown to change it");
@@ -81,8 +114,16 @@ std::vector<std::string> notes(const Spec& spec, const Sized& sized) {
     if (const auto* b = std::get_if<BipolarFigures>(&e.drive)) bipolar_notes(out, spec, sized, *b);
     if (const auto* m = std::get_if<MosfetFigures>(&e.drive)) mosfet_notes(out, spec, *m);
     if (e.clamp.at[0].v.vf_outside && spec.clamp.diode) {
-        out.push_back("the coil current at " + q(e.clamp.at[0].i0_a, Unit::ampere) + " lies outside " +
-                      display_id(*spec.clamp.diode) + "'s forward-voltage points; the nearest point was used");
+        const Diode& d = *spec.clamp.diode;
+        const bool above = e.clamp.at[0].i0_a > d.vf.back().if_a;
+        out.push_back("the coil current at " + q(e.clamp.at[0].i0_a, Unit::ampere) + (above ? " lies above " : " lies below ") +
+                      display_id(d) + "'s forward-voltage points; " +
+                      (above ? "Vf was extrapolated on log(current) from its last points"
+                             : "the nearest point was used (the safe side for the peak)"));
+    }
+    if (!spec.pin.voh_v && !spec.array()) {
+        out.emplace_back("the pin was taken as ideal (no output resistance): give pin.voh at pin.voh_current from the "
+                         "microcontroller's data (VOH at IOH) for its real output voltage under load");
     }
     if (!spec.coil.inductance_h) {
         out.emplace_back("no coil inductance: release time and clamp energy are not estimated; measure the coil with an LCR "

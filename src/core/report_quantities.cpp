@@ -45,6 +45,11 @@ void bipolar_quantities(Q& qs, const Spec& spec, const Sized& sized, const Bipol
     add(qs, "pin_output_resistance_ohm", f.pin_r_out_ohm, Unit::ohm, "pin output resistance");
     add(qs, "base_resistor_max_ohm", f.window_max_ohm, Unit::ohm, "base resistor, largest that saturates");
     add(qs, "base_resistor_min_ohm", f.window_min_ohm, Unit::ohm, "base resistor, smallest the pin can carry");
+    // The window's robustness (docs/method.md "Bipolar drivers"): Rb_max / Rb_min.
+    if (f.window_min_ohm > 0 && f.window_max_ohm > 0) {
+        add(qs, "base_resistor_window_ratio", f.window_max_ohm / f.window_min_ohm, Unit::number,
+            "base resistor window, largest over smallest");
+    }
     if (sized.r_drive_ohm) {
         add(qs, "base_resistor_ohm", *sized.r_drive_ohm, Unit::ohm, "base resistor");
         add(qs, "base_current_min_a", min2(a.base_current_min_a, b.base_current_min_a), Unit::ampere, "base current, lowest");

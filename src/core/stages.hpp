@@ -17,16 +17,9 @@ void describe_driver(const MosfetDriver& d, const Spec& spec, double r_drive_ohm
 void describe_driver(const ArrayDriver& d, const Spec& spec, double r_drive_ohm, DriverCommon& out);
 
 // The corner's drive input; a kind may take another current or ambient for a check.
-inline DriveInput drive_input(const BipolarDriver&, const CoilFigures& coil, const Conditions& c, std::size_t,
+inline DriveInput drive_input(const BipolarDriver&, const CoilFigures&, const Conditions&, std::size_t,
                               const DriveInput& in) {
-    // Edition 1: the bipolar driver is sized at the cold coil's current with 25 °C data, and its
-    // thermal check takes that current at the highest ambient.
-    DriveInput out = in;
-    out.ambient_c = 25.0;
-    out.current_a = coil.at[0].current_max_a;
-    out.thermal_ambient_c = c.ta_hi_c;
-    out.thermal_current_a = coil.at[0].current_max_a;
-    return out;
+    return in;
 }
 inline DriveInput drive_input(const MosfetDriver&, const CoilFigures&, const Conditions&, std::size_t,
                               const DriveInput& in) {

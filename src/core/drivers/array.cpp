@@ -31,15 +31,20 @@ void array_corner(const ArrayDriver& d, const Spec& spec, const Conditions& c, c
     f.pin_current_max_a = std::max(0.0, c.vdd_hi_v - defaults::array_vin_low_v) / d.input_lo_ohm;
     checks.set(CheckId::pin_current, at_most(f.pin_current_max_a, spec.pin.max_current_a));
     // The lowest pin voltage must reach the input voltage that guarantees the output on.
-    checks.set(CheckId::input_drive, at_least(c.vdd_lo_v, f.vin_on.value));
+    CheckValue drive = at_least(c.vdd_lo_v, f.vin_on.value);
+    if (f.vin_on.side == Side::above) mark_beyond_data(drive);  // docs/method.md "Data limits"
+    checks.set(CheckId::input_drive, drive);
     checks.set(CheckId::transistor_current, at_most(i, d.derated_ic_a));
     // One channel alone: P = Vce(sat) I, Tj = Ta + P RthJA (the board adds the package's sum).
     const double i_th = in.thermal_current_a;
-    const double vce_th = i_th == i ? f.vce_sat.value : curves::curve_at(a.vce_sat, i_th, ln_not_set).value;
-    f.power_w = vce_th * i_th;
+    const Lookup vce_th = i_th == i ? f.vce_sat : curves::curve_at(a.vce_sat, i_th, ln_not_set);
+    f.power_w = vce_th.value * i_th;
     f.junction_c = in.thermal_ambient_c + f.power_w * d.rth_k_per_w;
-    checks.set(CheckId::transistor_thermal, at_most(f.junction_c, d.tj_limit_c));
+    CheckValue thermal = at_most(f.junction_c, d.tj_limit_c);
+    if (vce_th.side == Side::above) mark_beyond_data(thermal);
+    checks.set(CheckId::transistor_thermal, thermal);
     common.on_drop_v = f.vce_sat.value;
+    common.drop_beyond_data = f.vce_sat.side == Side::above;
     common.coil_voltage_min_v = c.vs_lo_v - f.vce_sat.value;
     common.pin_current_max_a = f.pin_current_max_a;
     common.power_w = f.power_w;

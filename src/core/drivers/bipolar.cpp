@@ -96,7 +96,8 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
 
     // The thermal check's own corner may carry another current (docs/method.md: the hot corner).
     const double i_th = in.thermal_current_a;
-    const double vce_th = i_th == i ? f.vce_sat_v : curves::vce_sat_at(tr, i_th, ln_not_set).value;
+    const Lookup vce_th_lookup = i_th == i ? f.vce_lookup : curves::vce_sat_at(tr, i_th, ln_not_set);
+    const double vce_th = vce_th_lookup.value;
     if (rb_ohm > 0) {
         // Lowest base current: VDD_lo, Vbe(sat) max, Rb at +tb, behind R_out, less the pull-down.
         f.base_current_min_a = (c.vdd_lo_v - f.vbe_sat_v) / (rb_ohm * c.rb_hi_factor + d.pin_r_out_ohm) - f.pulldown_current_a;
@@ -111,6 +112,8 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
             sat = at_most(f.forced_gain_worst, f.beta_target);
             if (sat.verdict == Verdict::pass && f.vce_sat_not_guaranteed) sat.verdict = Verdict::warn;
         }
+        // Data limits: hFE beyond its points on either side, or Vbe(sat) above its highest point.
+        if (f.hfe_lookup.side != Side::within || f.vbe_lookup.side == Side::above) mark_beyond_data(sat);
         checks.set(CheckId::transistor_saturation, sat);
         checks.set(CheckId::pin_current, at_most(f.pin_current_max_a, spec.pin.max_current_a));
         checks.set(CheckId::resistor_power, at_most(f.resistor_power_w, d.resistor_power_limit_w));
@@ -129,9 +132,12 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
         f.transistor_power_w = vce_th * i_th;
     }
     f.junction_temp_c = in.thermal_ambient_c + f.transistor_power_w * d.rth_k_per_w;
-    checks.set(CheckId::transistor_thermal, at_most(f.junction_temp_c, d.tj_limit_c));
+    CheckValue thermal = at_most(f.junction_temp_c, d.tj_limit_c);
+    if (vce_th_lookup.side == Side::above || (rb_ohm > 0 && f.vbe_lookup.side == Side::above)) mark_beyond_data(thermal);
+    checks.set(CheckId::transistor_thermal, thermal);
 
     common.on_drop_v = f.vce_sat_v;
+    common.drop_beyond_data = f.vce_lookup.side == Side::above;
     common.coil_voltage_min_v = c.vs_lo_v - f.vce_sat_v;
     common.pin_current_max_a = f.pin_current_max_a;
     common.power_w = f.transistor_power_w;

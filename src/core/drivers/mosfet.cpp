@@ -111,7 +111,12 @@ void mosfet_corner(const MosfetDriver& d, const Spec& spec, const Conditions& c,
         checks.set(CheckId::transistor_thermal, failed_without_value(d.tj_limit_c));
     } else {
         f.thermal.power_w += p_avalanche_w;
-        checks.set(CheckId::transistor_thermal, at_most(f.thermal.junction_c, d.tj_limit_c));
+        CheckValue thermal = at_most(f.thermal.junction_c, d.tj_limit_c);
+        // Data limits: a current above the Rds(on) point's test current is its unsafe side.
+        if (f.rds_point >= 0 && in.thermal_current_a > m.rds_on[static_cast<std::size_t>(f.rds_point)].id_a * (1.0 + 1e-9)) {
+            mark_beyond_data(thermal);
+        }
+        checks.set(CheckId::transistor_thermal, thermal);
     }
 
     // Operate: the hot coil at the lowest supply, Rds(on) at the junction that current gives.
@@ -123,6 +128,7 @@ void mosfet_corner(const MosfetDriver& d, const Spec& spec, const Conditions& c,
     // V_coil = Vs_lo R_hot / (R_hot + R_ds,hot)
     common.coil_voltage_min_v = c.vs_lo_v * r_coil / (r_coil + f.rds_operate_ohm);
     common.on_drop_v = c.vs_lo_v - common.coil_voltage_min_v;
+    common.drop_beyond_data = f.rds_point >= 0 && i_op > pt.id_a * (1.0 + 1e-9);
     common.pin_current_max_a = std::max(f.pin_peak_a, f.pin_dc_a);
     common.power_w = f.thermal.power_w;
     common.junction_c = f.thermal.junction_c;
