@@ -215,6 +215,29 @@ TEST_SUITE("spice") {
         check_design(lab_relay_nmos, "lab-nmos");
     }
 
+    TEST_CASE("at -40 °C with SPICE's own gain law (XTB) the chosen base resistor still saturates the transistor") {
+        // ngspice at .options temp=-40 with the part's 25 °C gain and XTB = 1.5 (TNOM 25 °C): the
+        // simulator's BF(T) = BF (T/TNOM)^XTB is the method's gain law, and its own Is(T) lowers
+        // Vbe about 2 mV/K; the clamp diodes stay at 27 °C. If the report's cold corner holds,
+        // the simulated coil current is the saturated one (within 2 %) and the timing agrees.
+        REQUIRE_MESSAGE(ngspice_found(), "ngspice not found: install the Debian package ngspice (CI installs it)");
+        std::string cold = valve_relay_diode;
+        cold.replace(cold.find(R"("min": "0C")"), 11, R"("min": "-40C")");
+        const Spec spec = spec_from(cold);
+        const SizingReport report = size(spec, table().catalogue);
+        io::NetlistOptions options;
+        options.device_temperature = true;
+        const std::string netlist = io::spice_netlist(report, options);
+        CHECK(netlist.find("temp=-40") != std::string::npos);
+        CHECK(netlist.find("xtb=1.5") != std::string::npos);
+        const auto meas = run_ngspice(netlist, "cold-xtb");
+        const double current = report.quantity("coil_current_max_a").value_or(0);
+        INFO("report " << current << " A, ngspice at -40 C " << meas.at("coil_current_on") << " A");
+        CHECK(current == Approx(meas.at("coil_current_on")).epsilon(0.02));
+        CHECK(report.quantity("release_time_s").value_or(0) >= 0.99 * meas.at("release_time"));
+        CHECK(report.quantity("peak_collector_voltage_v").value_or(0) >= 0.99 * meas.at("peak_collector"));
+    }
+
     TEST_CASE("ngspice agrees with the report for every example with a coil inductance") {
         namespace fs = std::filesystem;
         for (const auto& entry : fs::directory_iterator(COILFIT_TEST_EXAMPLES_DIR)) {

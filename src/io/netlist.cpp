@@ -120,8 +120,11 @@ void check_simulable(const SizingReport& report) {
 
 }  // namespace
 
-std::string spice_netlist(const SizingReport& report) {
+std::string spice_netlist(const SizingReport& report) { return spice_netlist(report, NetlistOptions{}); }
+
+std::string spice_netlist(const SizingReport& report, const NetlistOptions& options) {
     check_simulable(report);
+    const bool cold_devices = options.device_temperature && report.spec.bipolar();
     const Spec& spec = report.spec;
     const Sized& sized = report.sized;
     const Conditions& c = sized.conditions;
@@ -132,7 +135,7 @@ std::string spice_netlist(const SizingReport& report) {
     const double r_cold = e.coil.at[0].r_cold_ohm;
     const double i0 = e.coil.at[0].current_max_a;
     const double i_rel = e.coil.release_current_a;
-    const netlist::DriverNetlist drv = spec.mosfet() ? netlist::mosfet_netlist(report) : netlist::bipolar_netlist(report);
+    const netlist::DriverNetlist drv = spec.mosfet() ? netlist::mosfet_netlist(report) : netlist::bipolar_netlist(report, cold_devices);
 
     // Diode models. Peak corner: through the report's maximum drop at I0. Timing corner: through
     // the low drop vf_low at the release current, no series resistance, so the drop is at least
@@ -226,13 +229,13 @@ std::string spice_netlist(const SizingReport& report) {
         line(fmt::format("vsense_{0} vs top_{0} dc 0", copy));
         line(fmt::format("rcoil_{0} top_{0} mid_{0} {1}", copy, num(r_cold)));
         line(fmt::format("lcoil_{0} mid_{0} c_{0} {1}", copy, num(l_h)));
-        const char* dmodel = peak ? "dpeak" : "dlow";
+        const std::string dmodel = std::string(peak ? "dpeak" : "dlow") + (cold_devices ? " temp=27" : "");
         switch (spec.clamp.type) {
         case ClampType::diode: line(fmt::format("d_{0} c_{0} vs {1}", copy, dmodel)); break;
         case ClampType::diode_zener:
         case ClampType::diode_tvs:
             line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
-            line(fmt::format("dz_{0} vs k_{0} {1}", copy, peak ? "zpeak" : "zlow"));
+            line(fmt::format("dz_{0} vs k_{0} {1}{2}", copy, peak ? "zpeak" : "zlow", cold_devices ? " temp=27" : ""));
             break;
         case ClampType::diode_resistor:
             line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
@@ -251,7 +254,8 @@ std::string spice_netlist(const SizingReport& report) {
     }
     line("");
     comment("Gear integration and a tight relative tolerance for the stiff turn-off.");
-    line(fmt::format(".options method=gear reltol=1e-4 temp={} tnom={}", num(netlist::sim_temp_c), num(netlist::sim_temp_c)));
+    const double temp = cold_devices ? c.ta_lo_c : netlist::sim_temp_c;
+    line(fmt::format(".options method=gear reltol=1e-4 temp={} tnom={}", num(temp), num(netlist::sim_temp_c)));
     line(fmt::format(".tran {} {} 0 {}", secs(t_max), secs(t_stop), secs(t_max)));
     line(fmt::format(".meas tran {} find i(vsense_r) at={}", meas_coil_current, secs(t_off)));
     line(fmt::format(".meas tran {} max v(c_p) from={} to={}", meas_peak_collector, secs(t_off), secs(t_stop)));

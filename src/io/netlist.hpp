@@ -24,4 +24,13 @@ inline constexpr std::string_view meas_release_time = "release_time";
 // resistor.
 [[nodiscard]] std::string spice_netlist(const SizingReport& report);
 
+// With device_temperature the simulation runs at the cold corner's ambient (.options temp) and
+// the NPN model carries the part's 25 °C gain with SPICE's own temperature law (XTB equal to the
+// method's gain exponent, TNOM 25 °C), instead of the gain the report corrected for the corner;
+// the clamp diodes stay at the simulator's 27 °C (instance temp), so only the drive is affected.
+struct NetlistOptions {
+    bool device_temperature = false;
+};
+[[nodiscard]] std::string spice_netlist(const SizingReport& report, const NetlistOptions& options);
+
 }  // namespace coilfit::io

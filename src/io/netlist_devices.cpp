@@ -27,7 +27,7 @@ std::vector<std::string> DriverNetlist::elements(const std::string& copy) const 
     return out;
 }
 
-DriverNetlist bipolar_netlist(const SizingReport& report) {
+DriverNetlist bipolar_netlist(const SizingReport& report, bool device_temperature) {
     const Spec& spec = report.spec;
     const Sized& sized = report.sized;
     const Conditions& c = sized.conditions;
@@ -41,7 +41,9 @@ DriverNetlist bipolar_netlist(const SizingReport& report) {
     const double r_out = std::max(std::get<BipolarFigures>(e.drive).pin_r_out_ohm, 1e-3);  // SPICE resistors must not be zero
     const double rb = *sized.r_drive_ohm * c.rb_hi_factor;
     // Generic NPN: forward gain the part's minimum at I0; the saturation voltage kept low.
-    const double bf = f.hfe_min;
+    // With device_temperature, the 25 °C gain and SPICE's own law BF(T) = BF (T/TNOM)^XTB.
+    const double bf = device_temperature ? f.hfe_lookup.value : f.hfe_min;
+    const double xtb = tr.hfe_temp_exponent.value_or(1.5);
     const double rc = npn_rc_fraction * f.vce_sat_v / i0;
     // Intrinsic Gummel-Poon saturation voltage at forced gain bf_f:
     // Vce(sat) = Vt ln[(1/alpha_R + bf_f/BR) / (1 - bf_f/BF)], alpha_R = BR/(1+BR) (Ebers-Moll).
@@ -65,7 +67,15 @@ DriverNetlist bipolar_netlist(const SizingReport& report) {
     d.element_templates.push_back("rb_{0} pin_{0} b_{0} " + num(rb));
     if (spec.pulldown_ohm) d.element_templates.push_back("rbe_{0} b_{0} 0 " + num(*spec.pulldown_ohm));
     d.element_templates.emplace_back("q_{0} c_{0} b_{0} 0 qdrv");
-    d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={})", num(npn_is_a), num(bf), num(npn_br), num(rc)));
+    if (device_temperature) {
+        d.comments.push_back(fmt::format("    At the cold corner's {} C: BF is the 25 C gain with XTB = {} and TNOM = 25 C (SPICE's gain law",
+                                         num(sized.conditions.ta_lo_c), num(xtb)));
+        d.comments.emplace_back("    BF (T/TNOM)^XTB, the method's exponent); the clamp diodes keep 27 C (instance temp).");
+        d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={} xtb={} tnom=25)", num(npn_is_a), num(bf), num(npn_br),
+                                       num(rc), num(xtb)));
+    } else {
+        d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={})", num(npn_is_a), num(bf), num(npn_br), num(rc)));
+    }
     return d;
 }
 

@@ -28,7 +28,8 @@ struct DriverNetlist {
     std::vector<std::string> element_templates;  // with {0} for the copy's suffix
 };
 
-[[nodiscard]] DriverNetlist bipolar_netlist(const SizingReport& report);
+// device_temperature: the model's 25 °C gain with XTB (see NetlistOptions).
+[[nodiscard]] DriverNetlist bipolar_netlist(const SizingReport& report, bool device_temperature = false);
 [[nodiscard]] DriverNetlist mosfet_netlist(const SizingReport& report);
 
 }  // namespace coilfit::io::netlist
