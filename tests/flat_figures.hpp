@@ -77,6 +77,7 @@ inline Flat flat(const Evaluation& e) {
 // The clamp voltages at I0 with the zener's band lo..hi (resistor tolerances at 1).
 inline ClampVoltages clamp_voltages_at(const ClampSpec& clamp, double i0_a, double vz_lo_v, double vz_hi_v) {
     Conditions c;
+    c.ta_lo_c = c.ta_hi_c = 25.0;  // the zener at its 25 °C data (no drift)
     c.vz_lo_v = vz_lo_v;
     c.vz_hi_v = vz_hi_v;
     return clamp_voltages(clamp, i0_a, c);

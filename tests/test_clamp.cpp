@@ -156,8 +156,24 @@ TEST_SUITE("clamp") {
         c.type = ClampType::diode_zener;  // Vz_hi + Vf for the peak, Vz_lo + the low drop for timing
         c.zener = z;
         v = test::clamp_voltages_at(c, i0, 11.4, 12.6);
-        CHECK(v.peak_v == Approx(12.6 + vf_max));
+        // Edition 2: above its test current the zener rises Zzt (I0 - Izt) for the peak; the
+        // timing takes the bottom of the band (no knee above Izt).
+        REQUIRE(z.zzt_ohm.has_value());
+        REQUIRE(z.izt_a.has_value());
+        REQUIRE(i0 > *z.izt_a);
+        CHECK(v.peak_v == Approx(12.6 + *z.zzt_ohm * (i0 - *z.izt_a) + vf_max));
         CHECK(v.timing_v == Approx(11.4 + 0.6));
+        // Below its test current the timing voltage takes the knee: Vz_lo - Zzt (Izt - I),
+        // or 90 % of Vz_lo without Zzt (common practice).
+        const double small = 0.5 * *z.izt_a;
+        v = test::clamp_voltages_at(c, small, 11.4, 12.6);
+        CHECK(v.timing_v == Approx(11.4 - *z.zzt_ohm * (*z.izt_a - small) + 0.6));
+        CHECK(v.peak_v == Approx(12.6 + vf_max_at(d, small).value));
+        Zener no_zzt = z;
+        no_zzt.zzt_ohm.reset();
+        c.zener = no_zzt;
+        CHECK(test::clamp_voltages_at(c, small, 11.4, 12.6).timing_v == Approx(0.9 * 11.4 + 0.6));
+        c.zener = z;
         c.type = ClampType::diode_resistor;  // I0 Rs + Vf for the peak; Rs joins the loop for timing
         c.zener.reset();
         c.resistor_ohm = 470.0;
@@ -179,15 +195,21 @@ TEST_SUITE("clamp") {
         const double i0 = 13.2 / r_cold;
         const double i_rel = 0.1 * 12.0 / 400.0;
         const double vf_max = vf_max_at(*s.clamp.diode, i0).value;
-        CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + 12.0 * 1.05 + vf_max));
+        // Edition 2: the zener's top tolerance, its rise Zzt (I0 - Izt), and its drift at 50 °C;
+        // for timing its bottom tolerance less the drift at 0 °C (where it is lowest).
+        const Zener& zr = *s.clamp.zener;
+        const double drift_hot = zr.vz_tempco_v_per_k.value_or(0) * (50.0 - 25.0);
+        const double drift_cold = zr.vz_tempco_v_per_k.value_or(0) * (0.0 - 25.0);
+        const double vz_peak = 12.0 * 1.05 + zr.zzt_ohm.value_or(0) * (i0 - zr.izt_a.value_or(i0)) + std::max(drift_hot, 0.0);
+        CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + vz_peak + vf_max));
         // Closed form (method.md) with Vc = Vz_lo + vf_low, worked here independently.
-        const double vc = 12.0 * 0.95 + 0.6;
+        const double vc = 12.0 * 0.95 + std::min(drift_cold, 0.0) + 0.6;
         const double tau = 0.9 / r_cold;
         CHECK(test::flat(z.worst).release_time_s == Approx(tau * std::log((i0 + vc / r_cold) / (i_rel + vc / r_cold))));
         // Zener power: f Vz_hi Q at the highest clamp voltage, where the zener takes the most energy.
-        const double vc_hi = 12.0 * 1.05 + vf_max;
+        const double vc_hi = vz_peak + vf_max;
         const double q_hi = tau * i0 - vc_hi / r_cold * tau * std::log1p(i0 * r_cold / vc_hi);
-        CHECK(test::flat(z.worst).zener_power_w == Approx(1.0 * 12.0 * 1.05 * q_hi));
+        CHECK(test::flat(z.worst).zener_power_w == Approx(1.0 * vz_peak * q_hi));
         CHECK(test::flat(z.worst).clamp_energy_j == Approx(vc_hi * q_hi));
     }
 

@@ -145,7 +145,10 @@ struct Compared {
 };
 
 // Exports the netlist of a design, simulates it and checks the report against the simulation.
-Compared check_against_ngspice(const Spec& spec, const std::string& tag) {
+// release_long: how much longer than the simulation the report's release may be. The method
+// holds a zener at its bottom tolerance for timing and credits none of its rise with current
+// (Zzt (I - Izt)), which the simulated zener has: far above Izt the estimate errs long by more.
+Compared check_against_ngspice(const Spec& spec, const std::string& tag, double release_long = 1.10) {
     Compared c;
     REQUIRE_MESSAGE(ngspice_found(), "ngspice not found: install the Debian package ngspice (CI installs it)");
     const SizingReport report = size(spec, table().catalogue);
@@ -166,11 +169,13 @@ Compared check_against_ngspice(const Spec& spec, const std::string& tag) {
     CHECK(c.report_peak_v >= 0.99 * c.sim_peak_v);
     CHECK(c.report_peak_v <= c.sim_peak_v + 0.5);
     CHECK(c.report_release_s >= 0.99 * c.sim_release_s);
-    CHECK(c.report_release_s <= 1.10 * c.sim_release_s);
+    CHECK(c.report_release_s <= release_long * c.sim_release_s);
     return c;
 }
 
-Compared check_design(const char* json, const std::string& tag) { return check_against_ngspice(spec_from(json), tag); }
+Compared check_design(const char* json, const std::string& tag, double release_long = 1.10) {
+    return check_against_ngspice(spec_from(json), tag, release_long);
+}
 
 }  // namespace
 
@@ -203,12 +208,27 @@ TEST_SUITE("spice") {
         check_design(door_contactor_zener, "door-zener");
     }
 
+    TEST_CASE("diode + resistor at both resistor tolerances: the peak copy at +t, the timing copy at -t") {
+        // The clamp resistor's tolerance (edition 2): its high end sets the peak, its low end the
+        // release; each copy of the netlist carries its own, and ngspice agrees with both.
+        std::string json = interlock_relay_resistor;
+        json.replace(json.find(R"("resistor": "680R")"), 18, R"("resistor": "680R", "resistor_tolerance": "10%")");
+        const Spec spec = spec_from(json);
+        const SizingReport report = size(spec, table().catalogue);
+        const std::string netlist = io::spice_netlist(report);
+        CHECK(netlist.find("rs_p k_p vs 748") != std::string::npos);
+        CHECK(netlist.find("rs_r k_r vs 612") != std::string::npos);
+        check_against_ngspice(spec, "resistor-10pct");
+    }
+
     TEST_CASE("ngspice agrees with the report for a 12 V relay on a logic-level MOSFET and a 3.3 V pin") {
         check_design(vent_relay_nmos, "vent-nmos");
     }
 
     TEST_CASE("ngspice agrees with the report for a 24 V solenoid on a DPAK MOSFET with a diode and a 12 V zener") {
-        check_design(poultry_solenoid_nmos, "poultry-nmos");
+        // 0.66 A through a 12 V zener with Zzt 9 ohm (Izt 21 mA): the simulated zener sits 5.7 V
+        // above its bottom tolerance at I0, which the method does not credit (release errs long).
+        check_design(poultry_solenoid_nmos, "poultry-nmos", 1.20);
     }
 
     TEST_CASE("ngspice agrees with the report for a 5 V relay on a BSS138 with a Schottky diode") {

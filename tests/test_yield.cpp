@@ -196,6 +196,7 @@ TEST_SUITE("yield") {
         YieldSettings s;
         s.samples = 150001;  // more than two chunks, not a multiple of one
         s.seed = 42;
+        s.conditions = ConditionsMode::sampled;  // conditions drawn too: failures depend on the seed
         s.jobs = 1;
         const YieldResult one = run_yield(spec, s);
         const YieldResult again = run_yield(spec, s);
@@ -293,9 +294,10 @@ TEST_SUITE("yield") {
         CHECK(worst_margin < 0.0);
         CHECK(worst_margin >= design.worst.check(CheckId::coil_operate).margin());
         CHECK(worst_margin == doctest::Approx(design.worst.check(CheckId::coil_operate).margin()).epsilon(0.02));
-        // And the yield run names it.
+        // And the yield run names it (conditions drawn, as the corner test above draws them).
         YieldSettings st;
         st.samples = 20000;
+        st.conditions = ConditionsMode::sampled;
         const YieldResult r = run_yield(spec, st);
         CHECK(r.passed < st.samples);
         CHECK(r.passed > 0);
@@ -303,6 +305,23 @@ TEST_SUITE("yield") {
         CHECK(*r.most_frequent_failure == CheckId::coil_operate);
         CHECK(r.interval.lo <= r.pass_rate);
         CHECK(r.interval.hi >= r.pass_rate);
+    }
+
+    TEST_CASE("by default the conditions stay at each check's worst corner: a design failing only at the lowest supply yields 0 %") {
+        // docs/method.md "Statistical yield": yield is about part-to-part spread. The marginal
+        // design fails coil.operate at the lowest supply with a hot coil; every unit meets that
+        // supply, so none is guaranteed: 0 % held at the corner, clearly more with the
+        // conditions drawn (edition 1's --conditions sampled).
+        const Spec spec = data("yield_marginal_operate.json");
+        YieldSettings st;
+        st.samples = 20000;
+        const YieldResult held = run_yield(spec, st);
+        CHECK(held.settings.conditions == ConditionsMode::worst);
+        CHECK(held.pass_rate < 0.01);
+        st.conditions = ConditionsMode::sampled;
+        const YieldResult drawn = run_yield(spec, st);
+        CHECK(drawn.pass_rate > 0.3);
+        CHECK(drawn.pass_rate > held.pass_rate + 0.3);
     }
 
     TEST_CASE("checks skipped by the spec are left out of the per-check rates") {

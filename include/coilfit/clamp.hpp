@@ -34,9 +34,15 @@ struct ClampVoltages {
     bool limited = true;      // false for "none": only breakdown limits the voltage
 };
 
-// ln_i0 is ln(i0_a) when the caller has it (one log serves every lookup), else NaN.
+// ln_i0 is ln(i0_a) when the caller has it (one log serves every lookup), else NaN; ambient_c the
+// corner's ambient, for a zener's temperature drift from its 25 °C data.
 [[nodiscard]] ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditions& c,
-                                           double ln_i0 = ln_not_set);
+                                           double ln_i0 = ln_not_set, double ambient_c = 25.0);
+
+// A zener's or TVS's non-repetitive surge rating at an equivalent rectangular pulse width:
+// log-log between its points, beyond them the nearest point scaled as P ~ t^(-1/2) (the usual
+// thermal-impedance rule, common practice). 0 without points.
+[[nodiscard]] double pulse_rating_w(const std::vector<PulsePoint>& points, double width_s);
 
 // The decay of the coil current through the clamp, closed form with Vc constant.
 struct Decay {
@@ -66,6 +72,9 @@ struct ClampCorner {
     double release_time_s = 0, current_zero_time_s = 0, charge_c = 0;  // timing corner
     double energy_j = 0, charge_peak_c = 0;                            // energy corner
     double avalanche_j = 0;        // no clamp, a MOSFET rated for it: the energy per turn-off
+    // The pulse each turn-off drives into a zener or TVS (docs/method.md, pulse rating).
+    bool has_pulse = false;
+    double pulse_peak_w = 0, pulse_energy_j = 0, pulse_width_s = 0, pulse_rating_w = 0;
     bool has_rate = false;         // and a switching frequency
     double clamp_power_w = 0, diode_average_current_a = 0, zener_power_w = 0, resistor_power_w = 0;
 };
@@ -79,7 +88,7 @@ struct ClampFigures {
 enum class DiodeCurrentCase : std::uint8_t { peak, average };
 // What clamp.pulse compared (CheckValue::detail): a zener's or TVS's peak power against its
 // pulse rating, or, without a clamp, a MOSFET's avalanche energy per turn-off against EAR.
-enum class PulseCase : std::uint8_t { zener, tvs, avalanche };
+enum class PulseCase : std::uint8_t { zener, tvs, avalanche, unrated };
 
 struct Evaluation;
 [[nodiscard]] std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e);

@@ -34,6 +34,11 @@ inline constexpr double clamp_resistor_power_w = 0.25;  // a through-hole resist
 inline constexpr double clamp_resistor_tolerance = 0.05;
 inline constexpr double vf_low_silicon_v = 0.6;
 inline constexpr double vf_low_schottky_v = 0.3;
+// Repetitive pulses against a non-repetitive surge rating: 50 % (from memory: repetitive-pulse
+// derating of surge ratings is commonly 30-50 %).
+inline constexpr double pulse_derating = 0.50;
+// Below a zener's test current without Zzt: 10 % off its bottom tolerance (common practice).
+inline constexpr double zener_knee_factor = 0.90;
 
 // N-MOSFET drive (docs/method.md "N-MOSFET driver")
 inline constexpr double nmos_pulldown_ohm = 100e3;

@@ -59,6 +59,7 @@ struct ClampOption {
     double clamp_energy_j = 0;
     bool within_rating = true;        // collector within the transistor's derated rating (and pulse)
     std::string failed_check;         // the first check this option fails, if any
+    Verdict pulse_verdict = Verdict::skip;  // clamp.pulse of a zener or TVS option
     bool chosen = false;              // the clamp the spec uses
 };
 

@@ -95,6 +95,7 @@ struct Policy {
     double voltage_derating = defaults::voltage_derating;
     double junction_margin_k = defaults::junction_margin_k;
     double power_derating = defaults::power_derating;  // of resistor and zener power ratings
+    double pulse_derating = defaults::pulse_derating;  // of a zener's or TVS's surge rating
     double vbe_low_v = defaults::vbe_low_v;  // the lowest Vbe, for the highest pin current
 };
 

@@ -73,7 +73,15 @@ inline constexpr std::size_t yield_input_count = 9;
 using BandPositions = std::array<double, yield_input_count>;
 
 // The point of the worst-case box at the given positions: every range collapsed (lo == hi).
-[[nodiscard]] Conditions conditions_at(const Conditions& box, const BandPositions& positions);
+// How a sample treats the operating conditions (supply, ambient, pin VDD): held at each check's
+// worst corner (the default: yield asks about part-to-part spread, docs/method.md "Statistical
+// yield"), or drawn like the part spreads (edition 1's behaviour).
+enum class ConditionsMode : std::uint8_t { worst, sampled };
+[[nodiscard]] std::string_view conditions_mode_name(ConditionsMode m);  // "worst", "sampled"
+
+// With ConditionsMode::worst the supply, ambient and pin VDD keep the box's bands.
+[[nodiscard]] Conditions conditions_at(const Conditions& box, const BandPositions& positions,
+                                       ConditionsMode mode = ConditionsMode::sampled);
 // The positions of sample `index` under a seed and distribution.
 [[nodiscard]] BandPositions sample_positions(std::uint64_t seed, std::uint64_t index, Distribution distribution);
 
@@ -83,6 +91,7 @@ struct YieldSettings {
     std::uint64_t samples = 100000;
     std::uint64_t seed = 1;
     Distribution distribution = Distribution::uniform;
+    ConditionsMode conditions = ConditionsMode::worst;
     unsigned jobs = 1;  // threads; the result does not depend on it
 };
 

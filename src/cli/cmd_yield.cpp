@@ -53,13 +53,16 @@ bool has_typical_rds(const Transistor& t) {
 }
 
 // The inputs that vary in this spec, in words.
-std::vector<std::string> varied_inputs(const Spec& spec) {
+std::vector<std::string> varied_inputs(const Spec& spec, ConditionsMode mode) {
     std::vector<std::string> v;
-    if (spec.supply.tolerance > 0) v.emplace_back("supply.voltage");
-    if (spec.ambient.max_c > spec.ambient.min_c) v.emplace_back("ambient");
-    if (spec.pin.vdd_tolerance > 0) v.emplace_back("pin.vdd");
+    if (mode == ConditionsMode::sampled) {
+        if (spec.supply.lo_v() < spec.supply.hi_v()) v.emplace_back("supply.voltage");
+        if (spec.ambient.max_c > spec.ambient.min_c) v.emplace_back("ambient");
+        if (spec.pin.vdd_tolerance > 0) v.emplace_back("pin.vdd");
+    }
     if (spec.coil.tolerance > 0) v.emplace_back("coil.resistance");
-    if (spec.base_resistor.tolerance > 0) v.emplace_back("base_resistor.tolerance");
+    if (spec.bipolar() && spec.base_resistor.tolerance > 0) v.emplace_back("base_resistor.tolerance");
+    if (spec.mosfet() && spec.gate_resistor.tolerance > 0) v.emplace_back("gate_resistor.tolerance");
     if (spec.clamp.type == ClampType::diode_zener && spec.clamp.zener && spec.clamp.zener->tolerance > 0) {
         v.emplace_back("clamp.zener");
     }
@@ -116,10 +119,17 @@ std::string render_text(const Spec& spec, const YieldResult& r, const io::TextSt
                           (worst_pass ? " (every check at its worst corner)" : " (see coilfit size)"));
     row("samples", fmt::format("{}, {} within the tolerances, seed {}", grouped(st.samples),
                                distribution_name(st.distribution), st.seed));
+    row("conditions", st.conditions == ConditionsMode::worst
+                          ? std::string("supply, ambient and pin VDD held at each check's worst corner; part spreads drawn")
+                          : std::string("supply, ambient and pin VDD drawn with the part spreads (--conditions sampled)"));
     const Verdict overall = r.passed == st.samples ? Verdict::pass : Verdict::fail;
     row("pass rate", io::paint(percent(r.pass_rate), overall, style) +
                          fmt::format("  (95 % interval {} to {}, Wilson score)", percent(r.interval.lo), percent(r.interval.hi)));
     row("failed", fmt::format("{} of {} samples", grouped(st.samples - r.passed), grouped(st.samples)));
+    if (!worst_pass && r.passed > 0) {
+        t += "  " + io::wrap("The design fails at worst case, yet most parts beat their datasheet limits: this share of units "
+                             "works, but no unit is guaranteed to.", width - 2, 2) + "\n";
+    }
     t += "\n";
 
     std::vector<std::array<std::string, 3>> rows;
@@ -145,7 +155,7 @@ std::string render_text(const Spec& spec, const YieldResult& r, const io::TextSt
         t += "  No sample failed a check.\n\n";
     }
 
-    const std::vector<std::string> varied = varied_inputs(spec);
+    const std::vector<std::string> varied = varied_inputs(spec, st.conditions);
     std::string varied_list;
     for (std::size_t i = 0; i < varied.size(); ++i) {
         varied_list += i == 0 ? "" : i + 1 == varied.size() ? " and " : ", ";
@@ -173,6 +183,7 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
     j["samples"] = r.settings.samples;
     j["seed"] = r.settings.seed;
     j["distribution"] = distribution_name(r.settings.distribution);
+    j["conditions"] = conditions_mode_name(r.settings.conditions);
     j["passed"] = r.passed;
     j["pass_rate"] = r.pass_rate;
     j["interval"] = io::Json::array({r.interval.lo, r.interval.hi});
@@ -195,7 +206,7 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
     j["checks"] = checks;
     j["most_frequent_failure"] =
         r.most_frequent_failure ? io::Json(check_id_name(*r.most_frequent_failure)) : io::Json(nullptr);
-    j["varied"] = varied_inputs(spec);
+    j["varied"] = varied_inputs(spec, r.settings.conditions);
     return j;
 }
 
@@ -272,6 +283,10 @@ CLI::App* setup_yield(CLI::App& app, YieldOptions& options) {
     cmd->add_option("--distribution", options.distribution,
                     "uniform within each tolerance, or normal with the tolerance at 3 sigma, truncated (default uniform)")
         ->check(CLI::IsMember({"uniform", "normal"}));
+    cmd->add_option("--conditions", options.conditions,
+                    "worst: hold supply, ambient and pin VDD at each check's worst corner and draw only part spreads "
+                    "(default); sampled: draw them too")
+        ->check(CLI::IsMember({"worst", "sampled"}));
     cmd->add_option("--jobs,-j", options.jobs, "threads to use (default 0: all cores); the result does not depend on it")
         ->check(whole_number(0, 4096));
     return cmd;
@@ -285,6 +300,7 @@ int run_yield(const YieldOptions& options) {
     settings.samples = options.samples;
     settings.seed = options.seed;
     settings.distribution = options.distribution == "normal" ? Distribution::normal : Distribution::uniform;
+    settings.conditions = options.conditions == "sampled" ? ConditionsMode::sampled : ConditionsMode::worst;
     settings.jobs = options.jobs != 0 ? options.jobs : std::max(1U, std::thread::hardware_concurrency());
 
     YieldResult result;

@@ -38,6 +38,7 @@ struct YieldOptions {
     std::uint64_t samples = 100000;
     std::uint64_t seed = 1;
     std::string distribution = "uniform";
+    std::string conditions = "worst";  // worst | sampled
     unsigned jobs = 0;  // 0: all cores
 };
 CLI::App* setup_yield(CLI::App& app, YieldOptions& options);

@@ -4,6 +4,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 #include "clamp_math.hpp"
 #include "coilfit/drivers/mosfet.hpp"
@@ -11,8 +12,25 @@
 
 namespace coilfit {
 
-ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditions& c, double ln_i0) {
+ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditions& c, double ln_i0, double ambient_c) {
+    (void)ambient_c;
     return clamp_math::voltages(clamp, i0_a, c, ln_i0);
+}
+
+double pulse_rating_w(const std::vector<PulsePoint>& points, double width_s) {
+    if (points.empty() || !(width_s > 0)) return 0.0;
+    const auto scaled = [width_s](const PulsePoint& p) { return p.power_w * std::sqrt(p.width_s / width_s); };
+    if (width_s <= points.front().width_s) return scaled(points.front());
+    if (width_s >= points.back().width_s) return scaled(points.back());
+    for (std::size_t i = 1; i < points.size(); ++i) {
+        if (width_s <= points[i].width_s) {
+            const PulsePoint& a = points[i - 1];
+            const PulsePoint& b = points[i];
+            const double t = std::log(width_s / a.width_s) / std::log(b.width_s / a.width_s);
+            return a.power_w * std::pow(b.power_w / a.power_w, t);
+        }
+    }
+    return scaled(points.back());
 }
 
 Decay rl_decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_release_a) {
@@ -32,6 +50,7 @@ namespace {
 // peak-current check, kept when it is the tighter of the two. True when both rate checks pass.
 bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, const CheckValue& diode_peak,
                      const Decay& slow, const Decay& hot, double clamp_energy_j, bool all, CheckSet& checks) {
+    (void)c;
     const Spec& spec = *p.spec;
     const Policy& policy = spec.policy;
     const double f = *spec.switching.frequency_hz;
@@ -48,7 +67,7 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
     CheckValue power;
     switch (spec.clamp.type) {
     case ClampType::diode_zener:
-        k.zener_power_w = f * c.vz_hi_v * hot.charge_c;
+        k.zener_power_w = f * k.v.part_peak_v * hot.charge_c;
         power = at_most(k.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w);
         break;
     case ClampType::diode_resistor:
@@ -56,10 +75,14 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
         power = at_most(k.resistor_power_w, policy.power_derating * spec.clamp.resistor_power_w);
         break;
     case ClampType::diode:
-    case ClampType::diode_tvs:
         // A diode has no power rating of its own here: its dissipation at the rated average
         // current, if_avg * Vf(if_avg), stands for it.
         power = at_most(k.clamp_power_w, p.diode_rated_power_w);
+        break;
+    case ClampType::diode_tvs:
+        // The diode's share, f Vf Q, against its rated dissipation; the TVS's pulses are
+        // clamp.pulse's (a TVS record gives no average rating).
+        power = at_most(f * (k.v.peak_v - k.v.part_peak_v) * hot.charge_c, p.diode_rated_power_w);
         break;
     case ClampType::none: return true;
     }
@@ -67,7 +90,33 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
     return avg.verdict == Verdict::pass && power.verdict == Verdict::pass;
 }
 
-// Release time, charge and energy of the decay, and the rate checks (see set_rate_checks).
+// clamp.pulse: the zener's (or TVS's) peak power P_pk = V I0 against d_pulse P_rated(t_p), with
+// the pulse's equivalent rectangular width t_p = E/P_pk = Q/I0 (docs/method.md, pulse rating).
+void set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet& checks) {
+    const bool tvs = spec.clamp.type == ClampType::diode_tvs;
+    k.has_pulse = true;
+    k.pulse_peak_w = k.v.part_peak_v * k.i0_a;
+    k.pulse_energy_j = k.v.part_peak_v * charge_c;
+    k.pulse_width_s = charge_c / k.i0_a;
+    std::vector<PulsePoint> one;
+    if (tvs) one.push_back({spec.clamp.tvs->ppk_width_s, spec.clamp.tvs->ppk_w});
+    const std::vector<PulsePoint>& points = tvs ? one : spec.clamp.zener->pulse;
+    CheckValue pulse;
+    if (points.empty()) {
+        // No pulse data: the check warns and names the peak power and width the part must stand.
+        // (No limit to compare: the report leaves the limit and the margin out.)
+        pulse = at_most(k.pulse_peak_w, 0.0);
+        pulse.verdict = Verdict::warn;
+    } else {
+        k.pulse_rating_w = pulse_rating_w(points, k.pulse_width_s);
+        pulse = at_most(k.pulse_peak_w, spec.policy.pulse_derating * k.pulse_rating_w);
+    }
+    pulse.detail = static_cast<std::uint8_t>(points.empty() ? PulseCase::unrated : tvs ? PulseCase::tvs : PulseCase::zener);
+    checks.set(CheckId::clamp_pulse, pulse);
+}
+
+// Release time, charge and energy of the decay, the rate checks (see set_rate_checks) and the
+// pulse check.
 void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_ohm, double release_current_a, bool all,
                    ClampCorner& k, CheckSet& checks) {
     const Spec& spec = *p.spec;
@@ -75,6 +124,7 @@ void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_oh
     const double i0 = k.i0_a;
     const bool release_checked = spec.coil.max_release_time_s.has_value();
     const bool rate_checked = spec.switching.frequency_hz.has_value();
+    const bool pulse_checked = spec.clamp.type == ClampType::diode_zener || spec.clamp.type == ClampType::diode_tvs;
     k.has_timing = true;
     // Timing corner: cold coil (longest tau, highest I0) and the lowest clamp voltage.
     // Energy corner: the highest clamp voltage takes the largest share of the stored energy.
@@ -86,19 +136,21 @@ void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_oh
     // (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the rate checks grow
     // with it, so where they pass at that bound they pass, and the charge logarithms are
     // spared. Otherwise (and always for every figure) the decays are worked out.
-    bool exact_rate = all || rate_checked;
-    if (!all && rate_checked && k.v.series_ohm == 0) {
+    bool exact_rate = all || rate_checked || pulse_checked;
+    if (!all && rate_checked && !pulse_checked && k.v.series_ohm == 0) {
         Decay bound;
         bound.tau_s = l / r_loop_hot;
         bound.charge_c = bound.tau_s * i0;
         const double bound_energy = clamp_math::energy(bound, vc_energy, k.v.series_ohm);
         exact_rate = !set_rate_checks(k, p, c, diode_peak, bound, bound, bound_energy, all, checks);
     }
-    if (exact_rate || release_checked) {
+    // The switching timing needs the time to zero current, which comes with the charge.
+    const bool end_needed = exact_rate || rate_checked;
+    if (end_needed || release_checked) {
         // A release current of I0 spares the release log where no one reads the release time;
-        // without exact rate checks the charge (and its log) is not needed either.
+        // without exact rate checks or switching timing the charge (and its log) is not needed.
         const double i_release = all || release_checked ? release_current_a : i0;
-        const Decay slow = clamp_math::decay(l, r_loop_slow, k.v.timing_v, i0, i_release, exact_rate);
+        const Decay slow = clamp_math::decay(l, r_loop_slow, k.v.timing_v, i0, i_release, end_needed);
         k.release_time_s = slow.release_time_s;
         k.current_zero_time_s = slow.end_time_s;
         k.charge_c = slow.charge_c;
@@ -108,6 +160,7 @@ void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_oh
             k.charge_peak_c = hot.charge_c;
             k.energy_j = clamp_math::energy(hot, vc_energy, k.v.series_ohm);
             if (rate_checked) set_rate_checks(k, p, c, diode_peak, slow, hot, k.energy_j, all, checks);
+            if (pulse_checked) set_pulse_check(k, spec, hot.charge_c, checks);
         }
     }
 }
@@ -119,18 +172,22 @@ void prepare_clamp(const Spec& spec, Prepared& p) {
     const Diode& d = *spec.clamp.diode;
     p.clamp_diode = &d;
     p.derated_vrrm_v = spec.policy.voltage_derating * d.vrrm_v;
-    p.diode_peak_limit_a = d.ifrm_a ? *d.ifrm_a : d.ifsm_a ? *d.ifsm_a : d.if_avg_a;
+    // Repetitive switching: the repetitive peak rating IFRM when given, else IF(AV); the 8.3 ms
+    // non-repetitive surge rating IFSM is never a limit here (docs/method.md, diode checks).
+    p.diode_peak_limit_a = d.ifrm_a ? *d.ifrm_a : d.if_avg_a;
     p.diode_rated_power_w = d.if_avg_a * vf_max_at(d, d.if_avg_a).value;
 }
 
-void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double r_coil_cold_ohm,
+void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double ambient_c, double r_coil_cold_ohm,
                   double release_current_a, const DriverCommon& driver, bool all, ClampCorner& k, CheckSet& checks) {
     const Spec& spec = *p.spec;
     k.i0_a = i0_a;
     k.has_timing = false;
     k.has_rate = false;
     k.release_time_s = 0;
+    (void)ambient_c;
     k.v = clamp_math::voltages(spec.clamp, i0_a, c, ln_i0);
+    k.has_pulse = false;
     if (!k.v.limited) {
         // No clamp: only breakdown limits the voltage. A MOSFET rated for repetitive avalanche
         // takes E = 1/2 L I0^2 V_BR / (V_BR - Vs_hi) per turn-off against d_P EAR (docs/method.md

@@ -13,6 +13,33 @@
 
 namespace coilfit::clamp_math {
 
+// A zener's voltage at the coil current (docs/method.md "Clamp (flyback) and timing"): for the
+// peak its top tolerance plus Zzt (I0 - Izt) above its test current; for timing its bottom
+// tolerance, below its test current lowered for the knee by Zzt (Izt - I0), or to 90 % without
+// Zzt. With vz_tempco the drift from its 25 °C data is taken where it is worst over the
+// ambient range: at Ta_hi for the peak (the method's rule; at Ta_lo for a negative
+// coefficient), and, a refinement on the safe side, where it lowers the voltage for timing.
+inline double zener_drift_v(const Zener& z, const Conditions& c, bool highest) {
+    if (!z.vz_tempco_v_per_k) return 0.0;
+    const double a = *z.vz_tempco_v_per_k * (c.ta_lo_c - 25.0);
+    const double b = *z.vz_tempco_v_per_k * (c.ta_hi_c - 25.0);
+    return highest ? std::max({a, b, 0.0}) : std::min({a, b, 0.0});
+}
+
+inline double zener_peak_v(const Zener& z, const Conditions& c, double i0_a) {
+    double v = c.vz_hi_v;
+    if (z.zzt_ohm && z.izt_a && i0_a > *z.izt_a) v += *z.zzt_ohm * (i0_a - *z.izt_a);
+    return v + zener_drift_v(z, c, true);
+}
+
+inline double zener_timing_v(const Zener& z, const Conditions& c, double i0_a) {
+    double v = c.vz_lo_v;
+    if (z.izt_a && i0_a < *z.izt_a) {
+        v = z.zzt_ohm ? c.vz_lo_v - *z.zzt_ohm * (*z.izt_a - i0_a) : defaults::zener_knee_factor * c.vz_lo_v;
+    }
+    return std::max(v + zener_drift_v(z, c, false), 0.0);
+}
+
 inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, const Conditions& c, double ln_i0) {
     ClampVoltages out;
     if (clamp.type == ClampType::none || !clamp.diode) {
@@ -28,9 +55,9 @@ inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, const Conditi
         out.timing_v = vf_lo;
         break;
     case ClampType::diode_zener:
-        out.part_peak_v = c.vz_hi_v;
-        out.peak_v = c.vz_hi_v + vf.value;
-        out.timing_v = c.vz_lo_v + vf_lo;
+        out.part_peak_v = zener_peak_v(*clamp.zener, c, i0_a);
+        out.peak_v = out.part_peak_v + vf.value;
+        out.timing_v = zener_timing_v(*clamp.zener, c, i0_a) + vf_lo;
         break;
     case ClampType::diode_resistor: {
         const double rs = clamp.resistor_ohm.value_or(0.0);

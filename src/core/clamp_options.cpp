@@ -21,8 +21,17 @@ ClampOption option_for(const Spec& spec, const Sized& sized, ClampSpec clamp, st
     o.peak_collector_v = e.peak_collector_voltage_v();
     if (e.clamp.at[0].has_timing) o.release_time_s = e.release_time_s();
     o.clamp_energy_j = std::max(e.clamp.at[0].energy_j, e.clamp.at[1].energy_j);
-    o.within_rating = o.peak_collector_v <= e.driver.peak_limit_v;
-    if (!o.within_rating) o.failed_check = "transistor.voltage";
+    // Within rating: the collector within its derated rating and the clamp part's pulse (and
+    // every other clamp check) passing; a failing option names its check.
+    o.within_rating = true;
+    for (const CheckId id : {CheckId::transistor_voltage, CheckId::clamp_pulse, CheckId::diode_current, CheckId::clamp_power}) {
+        if (e.check(id).verdict == Verdict::fail) {
+            o.within_rating = false;
+            o.failed_check = std::string(check_id_name(id));
+            break;
+        }
+    }
+    o.pulse_verdict = e.check(CheckId::clamp_pulse).verdict;
     o.chosen = chosen;
     return o;
 }
@@ -53,7 +62,10 @@ std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalo
         c.vz_lo_v = z.vz_v * (1 - z.tolerance);
         c.vz_hi_v = z.vz_v * (1 + z.tolerance);
         const ClampVoltages v = clamp_voltages(zc, i0, c);
-        if (sized.conditions.vs_hi_v + v.peak_v <= derated) fitting.push_back(&z);
+        if (sized.conditions.vs_hi_v + v.peak_v > derated) continue;
+        // Never offer a zener that fails its pulse rating (or any clamp check).
+        if (!option_for(spec, sized, zc, "", false).within_rating) continue;
+        fitting.push_back(&z);
     }
     std::stable_sort(fitting.begin(), fitting.end(), [](const Zener* a, const Zener* b) { return a->vz_v > b->vz_v; });
     // One per voltage, three at most, listed from low to high.

@@ -1,4 +1,5 @@
 // The words of the clamp stage's checks (numbers in clamp.cpp).
+#include <cmath>
 #include <string>
 
 #include "coilfit/clamp.hpp"
@@ -43,8 +44,9 @@ std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, con
                    q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + " against the diode's average rating " +
                    q(c.limit, Unit::ampere) + (ok ? std::string() : ": use a larger diode or switch less often");
         }
-        return "the diode takes the whole coil current " + q(c.value, Unit::ampere) + " at turn-off against its peak rating " +
-               q(c.limit, Unit::ampere) + (ok ? std::string() : ": use a diode with a higher peak current rating");
+        return "the diode takes the whole coil current " + q(c.value, Unit::ampere) + " at turn-off against its " +
+               (spec.clamp.diode && spec.clamp.diode->ifrm_a ? "repetitive peak rating IFRM " : "average rating IF(AV) ") +
+               q(c.limit, Unit::ampere) + (ok ? std::string() : ": use a diode with a higher repetitive peak current rating");
     case CheckId::clamp_pulse:
         if (c.detail == static_cast<std::uint8_t>(PulseCase::avalanche)) {
             if (!c.has_value) return "no clamp and the supply reaches the MOSFET's Vds max: it avalanches with no limit; fit a clamp";
@@ -52,7 +54,18 @@ std::string clamp_message(CheckId id, const CheckValue& c, const Spec& spec, con
                    q(c.limit, Unit::joule) + " (" + q(p.power_derating, Unit::ratio) + " of its repetitive rating EAR)" +
                    (ok ? std::string("; a clamp diode is still the gentler choice") : std::string(": fit a clamp diode across the coil"));
         }
-        return {};
+        {
+            const ClampCorner& k = e.clamp_at(c.corner);
+            const std::string part = c.detail == static_cast<std::uint8_t>(PulseCase::tvs) ? "the TVS" : "the zener";
+            const std::string pulse = "each turn-off drives " + q(k.pulse_peak_w, Unit::watt) + " peak into " + part + " for an equivalent " +
+                                      q(k.pulse_width_s, Unit::second) + " (" + q(k.pulse_energy_j, Unit::joule) + ")";
+            if (c.detail == static_cast<std::uint8_t>(PulseCase::unrated)) {
+                return pulse + ", and the record gives no pulse rating: confirm that the part stands it repeatedly";
+            }
+            return pulse + " against " + q(c.limit, Unit::watt) + " (" + q(p.pulse_derating, Unit::ratio) + " of its surge rating " +
+                   q(k.pulse_rating_w, Unit::watt) + " at that width, scaled as t^-1/2)" +
+                   (ok ? std::string() : ": use a larger zener or a TVS rated for the pulse");
+        }
     case CheckId::clamp_power:
         return "the clamp dissipates " + q(c.value, Unit::watt) + " on average at " +
                q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + " against " + q(c.limit, Unit::watt) +

@@ -18,8 +18,9 @@ Conditions worst_case_conditions(const Spec& spec) {
     const double tb = spec.mosfet() ? spec.gate_resistor.tolerance : spec.base_resistor.tolerance;
     c.rb_lo_factor = 1.0 - tb;
     c.rb_hi_factor = 1.0 + tb;
-    c.rs_lo_factor = 1.0;
-    c.rs_hi_factor = 1.0;
+    // The clamp resistor: its high tolerance for the peak, its low one for timing.
+    c.rs_lo_factor = 1.0 - spec.clamp.resistor_tolerance;
+    c.rs_hi_factor = 1.0 + spec.clamp.resistor_tolerance;
     if (spec.clamp.zener) {
         c.vz_lo_v = spec.clamp.zener->vz_v * (1.0 - spec.clamp.zener->tolerance);
         c.vz_hi_v = spec.clamp.zener->vz_v * (1.0 + spec.clamp.zener->tolerance);

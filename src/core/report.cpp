@@ -111,8 +111,10 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
             out.message = out.reason;
         } else {
             if (c.has_value && std::isfinite(c.value)) out.value = c.value;
-            if (std::isfinite(c.limit)) out.limit = c.limit;
-            if (const double m = c.margin(); std::isfinite(m)) out.margin = m;
+            // A zener without pulse data has nothing to compare against: no limit, no margin.
+            const bool unrated = id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::unrated);
+            if (std::isfinite(c.limit) && !unrated) out.limit = c.limit;
+            if (const double m = c.margin(); std::isfinite(m) && !unrated) out.margin = m;
             out.message = check_message(id, c, r.spec, e);
             if (c.beyond_data) out.message += " (beyond the part's data: the nearest point was used on its unsafe side)";
         }

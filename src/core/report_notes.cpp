@@ -121,6 +121,21 @@ std::vector<std::string> notes(const Spec& spec, const Sized& sized) {
                       (above ? "Vf was extrapolated on log(current) from its last points"
                              : "the nearest point was used (the safe side for the peak)"));
     }
+    if (spec.clamp.diode && spec.clamp.diode->ifsm_a) {
+        out.push_back("the diode's surge rating IFSM " + q(*spec.clamp.diode->ifsm_a, Unit::ampere) +
+                      " is a non-repetitive 8.3 ms rating, quoted only: repetitive turn-offs are held to " +
+                      (spec.clamp.diode->ifrm_a ? std::string("IFRM") : std::string("IF(AV)")));
+    }
+    if (spec.clamp.type == ClampType::diode_zener && spec.clamp.zener) {
+        const Zener& z = *spec.clamp.zener;
+        if (!z.zzt_ohm) {
+            out.push_back(display_id(z) + " gives no dynamic impedance zzt: its rise above the test current, and so part of the "
+                          "peak, is unknown; give zzt at izt");
+        }
+        if (!z.izt_a) {
+            out.push_back(display_id(z) + " gives no test current izt: the timing takes no knee below it; give izt");
+        }
+    }
     if (!spec.pin.voh_v && !spec.array()) {
         out.emplace_back("the pin was taken as ideal (no output resistance): give pin.voh at pin.voh_current from the "
                          "microcontroller's data (VOH at IOH) for its real output voltage under load");
@@ -182,8 +197,10 @@ ResistorReport resistor_report(const Spec& spec, const Sized& sized) {
 
 bool shows_skipped(CheckId id, const Spec& spec) {
     switch (id) {
+    case CheckId::switching_timing: return spec.switching.frequency_hz.has_value();
     case CheckId::clamp_pulse:
-        return spec.clamp.type == ClampType::none && spec.mosfet() && spec.mosfet()->ear_j.has_value();
+        return spec.clamp.type == ClampType::diode_zener || spec.clamp.type == ClampType::diode_tvs ||
+               (spec.clamp.type == ClampType::none && spec.mosfet() && spec.mosfet()->ear_j.has_value());
     case CheckId::coil_thermal: return spec.coil.thermal_resistance_k_per_w.has_value();
     default: return false;
     }

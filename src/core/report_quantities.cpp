@@ -90,12 +90,13 @@ void clamp_quantities(Q& qs, const Spec& spec, const Evaluation& e) {
     const ClampCorner& a = e.clamp.at[0];
     const ClampCorner& b = e.clamp.at[1];
     if (a.v.limited) {
-        add(qs, "peak_collector_voltage_v", e.peak_collector_voltage_v(), Unit::volt, "collector voltage at turn-off, peak");
+        add(qs, "peak_collector_voltage_v", e.peak_collector_voltage_v(), Unit::volt,
+            "peak " + std::string(e.driver.terminal) + " voltage at turn-off");
         add(qs, "clamp_voltage_peak_v", max2(a.v.peak_v, b.v.peak_v), Unit::volt, "clamp voltage, highest");
         add(qs, "clamp_voltage_timing_v", min2(a.v.timing_v, b.v.timing_v), Unit::volt, "clamp voltage, lowest (for timing)");
     }
     if (a.has_timing) {
-        add(qs, "release_time_s", e.release_time_s(), Unit::second, "release time, longest");
+        add(qs, "release_time_s", e.release_time_s(), Unit::second, "coil current falls to the release current in (longest)");
         add(qs, "current_zero_time_s", max2(a.current_zero_time_s, b.current_zero_time_s), Unit::second,
             "time until the coil current is zero");
     }
@@ -104,6 +105,14 @@ void clamp_quantities(Q& qs, const Spec& spec, const Evaluation& e) {
         add(qs, "clamp_energy_j", max2(a.energy_j, b.energy_j), Unit::joule, "clamp energy per turn-off");
         add(qs, "clamp_charge_coulomb", max2(a.charge_c, b.charge_c), Unit::coulomb, "charge through the clamp");
     }
+    for (const ClampCorner* k : {&a, &b}) {
+        if (!k->has_pulse || (k == &b && a.has_pulse && a.pulse_peak_w >= b.pulse_peak_w)) continue;
+        add(qs, "clamp_pulse_peak_w", k->pulse_peak_w, Unit::watt, "clamp part's peak power per turn-off");
+        add(qs, "clamp_pulse_width_s", k->pulse_width_s, Unit::second, "its equivalent pulse width");
+        if (k->pulse_rating_w > 0) add(qs, "clamp_pulse_rating_w", k->pulse_rating_w, Unit::watt, "its surge rating at that width");
+        break;
+    }
+    if (a.avalanche_j > 0) add(qs, "avalanche_energy_j", std::max(a.avalanche_j, b.avalanche_j), Unit::joule, "avalanche energy per turn-off");
     if (a.has_rate) {
         add(qs, "clamp_power_w", max2(a.clamp_power_w, b.clamp_power_w), Unit::watt, "clamp average power");
         add(qs, "diode_average_current_a", max2(a.diode_average_current_a, b.diode_average_current_a), Unit::ampere,

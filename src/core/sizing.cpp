@@ -40,8 +40,8 @@ void corner(const Prepared& p, const D& d, const Conditions& c, double r_drive_o
     stages::drive_corner(d, spec, c, in, r_drive_ohm, all, fig.at[k], e.driver.at[k], checks);
     coil_checks(spec.coil, coil, e.driver.at[k], c.vs_hi_v, checks);
     const double ln_i0 = coil.current_max_a == in.current_a ? in.ln_current : std::log(coil.current_max_a);
-    stages::clamp_corner(p, c, coil.current_max_a, ln_i0, coil.r_cold_ohm, e.coil.release_current_a, e.driver, all,
-                         e.clamp.at[k], checks);
+    stages::clamp_corner(p, c, coil.current_max_a, ln_i0, coil.ambient_c, coil.r_cold_ohm, e.coil.release_current_a, e.driver,
+                         all, e.clamp.at[k], checks);
     stages::timing_corner(spec, coil, e.driver.at[k], e.clamp.at[k], all, e.timing.at[k], checks);
 }
 

@@ -28,26 +28,60 @@ void timing_corner(const Spec& spec, const CoilCorner& coil, const DriverCorner&
     if (clamp.has_timing && spec.coil.max_release_time_s) {
         checks.set(CheckId::release_time, at_most(clamp.release_time_s, *spec.coil.max_release_time_s));
     }
-    if (all && spec.coil.inductance_h) {
+    const bool switching = spec.switching.frequency_hz.has_value();
+    if ((all || switching) && spec.coil.inductance_h) {
         // The hot coil at the lowest supply: the slowest rise to the operate current.
         out.has_operate = true;
         out.operate_time_s =
             operate_time_s(*spec.coil.inductance_h, coil.r_hot_ohm, driver.coil_voltage_min_v, coil.operate_voltage_v);
         out.operates = std::isfinite(out.operate_time_s);
     }
+    if (!switching || !spec.coil.inductance_h) return;
+    // switching.timing (docs/method.md "Switching timing"): the coil current reaches zero before
+    // the next turn-on, t_end <= (1 - D)/f, and the on-time exceeds the operate time, t_op <= D/f.
+    const double period_s = 1.0 / *spec.switching.frequency_hz;
+    const double on_s = spec.switching.duty * period_s;
+    const double off_s = period_s - on_s;
+    CheckValue on = out.operates ? at_most(out.operate_time_s, on_s) : failed_without_value(on_s);
+    on.detail = static_cast<std::uint8_t>(out.operates ? SwitchingCase::on_time : SwitchingCase::never_operates);
+    if (!clamp.has_timing) {
+        checks.set(CheckId::switching_timing, on);
+        return;
+    }
+    CheckValue off = at_most(clamp.current_zero_time_s, off_s);
+    off.detail = static_cast<std::uint8_t>(SwitchingCase::off_time);
+    // The worse of the two stands (for verdicts alone, the failing one).
+    const bool off_stands = all ? off.margin() < on.margin() : off.verdict == Verdict::fail;
+    checks.set(CheckId::switching_timing, off_stands ? off : on);
 }
 
 }  // namespace stages
 
 std::string timing_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e) {
     const bool ok = c.verdict == Verdict::pass || c.verdict == Verdict::warn;
-    (void)spec;
     (void)e;
     switch (id) {
     case CheckId::release_time:
-        return "the coil current falls to the release current within " + q(c.value, Unit::second) +
+        return "the coil current falls to the release current in " + q(c.value, Unit::second) +
                " (cold coil, lowest clamp voltage) against " + q(c.limit, Unit::second) +
+               "; the contacts open after the armature moves as well" +
                (ok ? std::string() : ": a diode + zener clamp releases faster; see the clamp options");
+    case CheckId::switching_timing: {
+        const auto how = static_cast<SwitchingCase>(c.detail);
+        const std::string at = " at " + q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + ", " +
+                               q(spec.switching.duty, Unit::ratio) + " on";
+        if (how == SwitchingCase::never_operates) {
+            return "the coil current never reaches the operate current at the lowest supply, so no on-time is long enough";
+        }
+        if (how == SwitchingCase::off_time) {
+            return "the coil current takes " + q(c.value, Unit::second) + " to reach zero after turn-off against the off-time " +
+                   q(c.limit, Unit::second) + at +
+                   (ok ? std::string() : ": switch less often, lower the duty, or use a faster clamp (diode + zener)");
+        }
+        return "the coil current takes " + q(c.value, Unit::second) + " to reach the operate current against the on-time " +
+               q(c.limit, Unit::second) + at + " (the armature's travel comes on top)" +
+               (ok ? std::string() : ": switch less often or raise the duty");
+    }
     default: return {};
     }
 }

@@ -106,12 +106,16 @@ double normal_quantile(double p) { return acklam_quantile(p); }
 
 double truncated_normal_3sigma(double u) { return truncated_z(u); }
 
-Conditions conditions_at(const Conditions& box, const BandPositions& t) {
+std::string_view conditions_mode_name(ConditionsMode m) { return m == ConditionsMode::worst ? "worst" : "sampled"; }
+
+Conditions conditions_at(const Conditions& box, const BandPositions& t, ConditionsMode mode) {
     auto pos = [&t](YieldInput input) { return t[static_cast<std::size_t>(input)]; };
     Conditions c = box;
-    c.vs_lo_v = c.vs_hi_v = at(box.vs_lo_v, box.vs_hi_v, pos(YieldInput::supply));
-    c.ta_lo_c = c.ta_hi_c = at(box.ta_lo_c, box.ta_hi_c, pos(YieldInput::ambient));
-    c.vdd_lo_v = c.vdd_hi_v = at(box.vdd_lo_v, box.vdd_hi_v, pos(YieldInput::pin_vdd));
+    if (mode == ConditionsMode::sampled) {
+        c.vs_lo_v = c.vs_hi_v = at(box.vs_lo_v, box.vs_hi_v, pos(YieldInput::supply));
+        c.ta_lo_c = c.ta_hi_c = at(box.ta_lo_c, box.ta_hi_c, pos(YieldInput::ambient));
+        c.vdd_lo_v = c.vdd_hi_v = at(box.vdd_lo_v, box.vdd_hi_v, pos(YieldInput::pin_vdd));
+    }
     c.r_coil_lo_ohm = c.r_coil_hi_ohm = at(box.r_coil_lo_ohm, box.r_coil_hi_ohm, pos(YieldInput::coil_resistance));
     c.rb_lo_factor = c.rb_hi_factor = at(box.rb_lo_factor, box.rb_hi_factor, pos(YieldInput::base_resistor));
     c.vz_lo_v = c.vz_hi_v = at(box.vz_lo_v, box.vz_hi_v, pos(YieldInput::zener));
@@ -149,9 +153,11 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
     // has none without a typical value (typical falls back to the minimum); holding it at 0 also
     // spares evaluate() a lookup. Streams are independent, so skipping one changes no other.
     std::array<bool, yield_input_count> varies{};
-    varies[static_cast<std::size_t>(YieldInput::supply)] = box.vs_lo_v != box.vs_hi_v;
-    varies[static_cast<std::size_t>(YieldInput::ambient)] = box.ta_lo_c != box.ta_hi_c;
-    varies[static_cast<std::size_t>(YieldInput::pin_vdd)] = box.vdd_lo_v != box.vdd_hi_v;
+    // Conditions held at their worst corners are not drawn.
+    const bool sampled = settings.conditions == ConditionsMode::sampled;
+    varies[static_cast<std::size_t>(YieldInput::supply)] = sampled && box.vs_lo_v != box.vs_hi_v;
+    varies[static_cast<std::size_t>(YieldInput::ambient)] = sampled && box.ta_lo_c != box.ta_hi_c;
+    varies[static_cast<std::size_t>(YieldInput::pin_vdd)] = sampled && box.vdd_lo_v != box.vdd_hi_v;
     varies[static_cast<std::size_t>(YieldInput::coil_resistance)] = box.r_coil_lo_ohm != box.r_coil_hi_ohm;
     varies[static_cast<std::size_t>(YieldInput::base_resistor)] = box.rb_lo_factor != box.rb_hi_factor;
     varies[static_cast<std::size_t>(YieldInput::zener)] = box.vz_lo_v != box.vz_hi_v;
@@ -192,7 +198,7 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
             }
         }
         for (std::size_t j = 0; j < n; ++j) {
-            evaluate_into(prepared, conditions_at(box, block[j]), rb_ohm, Figures::verdicts, e);
+            evaluate_into(prepared, conditions_at(box, block[j], settings.conditions), rb_ohm, Figures::verdicts, e);
             bool pass = true;
             for (std::size_t m = 0; m < n_in_use; ++m) {
                 const std::size_t k = in_use[m];

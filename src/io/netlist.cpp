@@ -148,8 +148,16 @@ std::string spice_netlist(const SizingReport& report, const NetlistOptions& opti
     // band at I0 and at the release current; a TVS from Vbr max to Vc at Ipp (peak) and at Vbr min.
     BreakdownModel z_peak, z_low;
     if (spec.clamp.type == ClampType::diode_zener) {
-        z_peak = {k.v.part_peak_v, i0, 0};
-        z_low = {k.v.timing_v - vf_lo, i_rel, 0};
+        const Zener& z = *spec.clamp.zener;
+        if (z.zzt_ohm && z.izt_a && *z.zzt_ohm > 0) {
+            // A zener with its dynamic impedance as series resistance: V(Izt) is the band's top
+            // (peak copy) or bottom (timing copy), V(I) = that + Zzt (I - Izt) either side.
+            z_peak = {c.vz_hi_v - *z.zzt_ohm * *z.izt_a, *z.izt_a, *z.zzt_ohm};
+            z_low = {c.vz_lo_v - *z.zzt_ohm * *z.izt_a, *z.izt_a, *z.zzt_ohm};
+        } else {
+            z_peak = {k.v.part_peak_v, i0, 0};
+            z_low = {k.v.timing_v - vf_lo, i_rel, 0};
+        }
     } else if (spec.clamp.type == ClampType::diode_tvs) {
         const Tvs& t = *spec.clamp.tvs;
         z_peak = {t.vbr_max_v, 1e-3, t.ipp_a > 1e-3 ? (t.vc_v - t.vbr_max_v) / (t.ipp_a - 1e-3) : 0.0};
