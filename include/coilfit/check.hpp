@@ -152,13 +152,21 @@ struct CheckSet {
     }
     // Every verdict back to skip (a reused set before an evaluation).
     void clear_verdicts() {
-        for (CheckValue& v : values) v.verdict = Verdict::skip;
+#if defined(__GNUC__)
+#pragma GCC unroll 32
+#endif
+        for (std::size_t i = 0; i < check_count; ++i) values[i].verdict = Verdict::skip;
     }
 };
 static_assert(check_count <= 32, "one bit per check");
 
 // The worse of two evaluations of one check (fail before warn before pass; then the smaller
-// margin, or with verdicts_only the first). Skipped counts as not evaluated.
-[[nodiscard]] const CheckValue& worse(const CheckValue& a, const CheckValue& b, bool verdicts_only);
+// margin, or with verdicts_only the first). Skipped counts as not evaluated. The verdicts are
+// declared in order of severity (skip, pass, warn, fail).
+[[nodiscard]] inline const CheckValue& worse(const CheckValue& a, const CheckValue& b, bool verdicts_only) {
+    if (a.verdict != b.verdict) return a.verdict > b.verdict ? a : b;
+    if (verdicts_only || a.verdict == Verdict::skip) return a;
+    return b.margin() < a.margin() ? b : a;
+}
 
 }  // namespace coilfit

@@ -8,6 +8,7 @@
 
 #include <array>
 #include <optional>
+#include <span>
 #include <string>
 
 #include "coilfit/check.hpp"
@@ -42,7 +43,7 @@ struct ClampVoltages {
 // A zener's or TVS's non-repetitive surge rating at an equivalent rectangular pulse width:
 // log-log between its points, beyond them the nearest point scaled as P ~ t^(-1/2) (the usual
 // thermal-impedance rule, common practice). 0 without points.
-[[nodiscard]] double pulse_rating_w(const std::vector<PulsePoint>& points, double width_s);
+[[nodiscard]] double pulse_rating_w(std::span<const PulsePoint> points, double width_s);
 
 // The decay of the coil current through the clamp, closed form with Vc constant.
 struct Decay {
@@ -70,6 +71,8 @@ struct ClampCorner {
     double peak_collector_v = 0;   // Vs_hi + the highest clamp voltage (or the transient, if higher)
     bool has_timing = false;       // inductance given and the clamp limits the voltage
     double release_time_s = 0, current_zero_time_s = 0, charge_c = 0;  // timing corner
+    double slow_tau_s = 0, slow_vc_over_r_a = 0;  // the timing corner's decay: tau and Vc/R
+    bool end_time_is_bound = false;  // verdicts only: current_zero_time_s is the bound L I0 / Vc
     double energy_j = 0, charge_peak_c = 0;                            // energy corner
     double avalanche_j = 0;        // no clamp, a MOSFET rated for it: the energy per turn-off
     // The pulse each turn-off drives into a zener or TVS (docs/method.md, pulse rating).

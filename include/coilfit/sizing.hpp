@@ -78,7 +78,8 @@ struct Evaluation {
     DriverFigures drive;
     ClampFigures clamp;
     TimingFigures timing;
-    CheckSet checks;
+    CheckSet checks;      // every check at its worse corner
+    CheckSet hot_checks;  // the hot corner's own checks, before the merge into `checks`
 
     [[nodiscard]] const CheckValue& check(CheckId id) const { return checks[id]; }
     [[nodiscard]] bool passes() const { return checks.passes(); }

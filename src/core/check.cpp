@@ -41,15 +41,6 @@ constexpr bool table_in_order() {
 }
 static_assert(table_in_order(), "the check table lists the checks in CheckId order");
 
-int severity(Verdict v) {
-    switch (v) {
-    case Verdict::fail: return 3;
-    case Verdict::warn: return 2;
-    case Verdict::pass: return 1;
-    case Verdict::skip: return 0;
-    }
-    return 0;
-}
 
 }  // namespace
 
@@ -76,12 +67,5 @@ void mark_beyond_data(CheckValue& c) {
     if (c.verdict == Verdict::pass) c.verdict = Verdict::warn;
 }
 
-const CheckValue& worse(const CheckValue& a, const CheckValue& b, bool verdicts_only) {
-    const int sa = severity(a.verdict);
-    const int sb = severity(b.verdict);
-    if (sa != sb) return sa > sb ? a : b;
-    if (verdicts_only || a.verdict == Verdict::skip) return a;
-    return b.margin() < a.margin() ? b : a;
-}
 
 }  // namespace coilfit

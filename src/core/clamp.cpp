@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <span>
 
 #include "clamp_math.hpp"
 #include "coilfit/drivers/mosfet.hpp"
@@ -17,7 +18,7 @@ ClampVoltages clamp_voltages(const ClampSpec& clamp, double i0_a, const Conditio
     return clamp_math::voltages(clamp, i0_a, c, ln_i0);
 }
 
-double pulse_rating_w(const std::vector<PulsePoint>& points, double width_s) {
+double pulse_rating_w(std::span<const PulsePoint> points, double width_s) {
     if (points.empty() || !(width_s > 0)) return 0.0;
     const auto scaled = [width_s](const PulsePoint& p) { return p.power_w * std::sqrt(p.width_s / width_s); };
     if (width_s <= points.front().width_s) return scaled(points.front());
@@ -92,15 +93,16 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
 
 // clamp.pulse: the zener's (or TVS's) peak power P_pk = V I0 against d_pulse P_rated(t_p), with
 // the pulse's equivalent rectangular width t_p = E/P_pk = Q/I0 (docs/method.md, pulse rating).
-void set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet& checks) {
+// True unless it fails.
+bool set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet& checks) {
     const bool tvs = spec.clamp.type == ClampType::diode_tvs;
     k.has_pulse = true;
     k.pulse_peak_w = k.v.part_peak_v * k.i0_a;
     k.pulse_energy_j = k.v.part_peak_v * charge_c;
     k.pulse_width_s = charge_c / k.i0_a;
-    std::vector<PulsePoint> one;
-    if (tvs) one.push_back({spec.clamp.tvs->ppk_width_s, spec.clamp.tvs->ppk_w});
-    const std::vector<PulsePoint>& points = tvs ? one : spec.clamp.zener->pulse;
+    const PulsePoint tvs_point{tvs ? spec.clamp.tvs->ppk_width_s : 0.0, tvs ? spec.clamp.tvs->ppk_w : 0.0};
+    const std::span<const PulsePoint> points =
+        tvs ? std::span<const PulsePoint>(&tvs_point, 1) : std::span<const PulsePoint>(spec.clamp.zener->pulse);
     CheckValue pulse;
     if (points.empty()) {
         // No pulse data: the check warns and names the peak power and width the part must stand.
@@ -113,6 +115,7 @@ void set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet
     }
     pulse.detail = static_cast<std::uint8_t>(points.empty() ? PulseCase::unrated : tvs ? PulseCase::tvs : PulseCase::zener);
     checks.set(CheckId::clamp_pulse, pulse);
+    return pulse.verdict != Verdict::fail;
 }
 
 // Release time, charge and energy of the decay, the rate checks (see set_rate_checks) and the
@@ -132,37 +135,48 @@ void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_oh
     const double r_loop_hot = r_coil_cold_ohm + k.v.series_ohm;
     const double vc_energy = spec.clamp.type == ClampType::diode_resistor ? k.v.peak_v - i0 * k.v.series_ohm : k.v.peak_v;
     const CheckValue diode_peak = checks[CheckId::diode_current];
-    // Verdicts only, no series resistor: the charge through the clamp is at most tau*I0
-    // (Q = tau*I0 - (Vc/R)*t_end, the second term is not negative) and the rate checks grow
-    // with it, so where they pass at that bound they pass, and the charge logarithms are
-    // spared. Otherwise (and always for every figure) the decays are worked out.
-    bool exact_rate = all || rate_checked || pulse_checked;
-    if (!all && rate_checked && !pulse_checked && k.v.series_ohm == 0) {
-        Decay bound;
-        bound.tau_s = l / r_loop_hot;
-        bound.charge_c = bound.tau_s * i0;
-        const double bound_energy = clamp_math::energy(bound, vc_energy, k.v.series_ohm);
-        exact_rate = !set_rate_checks(k, p, c, diode_peak, bound, bound, bound_energy, all, checks);
-    }
-    // The switching timing needs the time to zero current, which comes with the charge.
-    const bool end_needed = exact_rate || rate_checked;
-    if (end_needed || release_checked) {
-        // A release current of I0 spares the release log where no one reads the release time;
-        // without exact rate checks or switching timing the charge (and its log) is not needed.
-        const double i_release = all || release_checked ? release_current_a : i0;
-        const Decay slow = clamp_math::decay(l, r_loop_slow, k.v.timing_v, i0, i_release, end_needed);
-        k.release_time_s = slow.release_time_s;
-        k.current_zero_time_s = slow.end_time_s;
-        k.charge_c = slow.charge_c;
-        if (exact_rate) {
-            // Only the energy corner's charge and heat are used, never its release time.
-            const Decay hot = clamp_math::decay(l, r_loop_hot, vc_energy, i0, i0);
-            k.charge_peak_c = hot.charge_c;
-            k.energy_j = clamp_math::energy(hot, vc_energy, k.v.series_ohm);
-            if (rate_checked) set_rate_checks(k, p, c, diode_peak, slow, hot, k.energy_j, all, checks);
-            if (pulse_checked) set_pulse_check(k, spec, hot.charge_c, checks);
+    k.slow_tau_s = l / r_loop_slow;
+    k.slow_vc_over_r_a = k.v.timing_v > 0 ? k.v.timing_v / r_loop_slow : 0.0;
+    k.end_time_is_bound = false;
+    bool exact = all;
+    if (!all) {
+        // Verdicts only: bounds first, no logarithms. The charge Q = tau I0 - (Vc/R) t_end is at
+        // most tau I0, the resistor's integral of i^2 at most I0^2 tau / 2, the time to zero
+        // current t_end = tau ln(1 + I0 R/Vc) at most L I0 / Vc (ln(1 + x) <= x). The rate, pulse
+        // and switching checks all grow with these, so where one passes at its bound it passes;
+        // only a failing one needs the exact decay.
+        Decay slow_bound;
+        slow_bound.tau_s = k.slow_tau_s;
+        slow_bound.charge_c = slow_bound.tau_s * i0;
+        slow_bound.end_time_s = k.v.timing_v > 0 ? l * i0 / k.v.timing_v : INFINITY;
+        Decay hot_bound;
+        hot_bound.tau_s = l / r_loop_hot;
+        hot_bound.charge_c = hot_bound.tau_s * i0;
+        hot_bound.i2_integral = 0.5 * i0 * i0 * hot_bound.tau_s;
+        if (rate_checked) {
+            const double bound_energy = clamp_math::energy(hot_bound, vc_energy, k.v.series_ohm);
+            exact = !set_rate_checks(k, p, c, diode_peak, slow_bound, hot_bound, bound_energy, all, checks) || exact;
         }
+        if (pulse_checked) exact = !set_pulse_check(k, spec, hot_bound.charge_c, checks) || exact;
+        k.current_zero_time_s = slow_bound.end_time_s;
+        k.end_time_is_bound = true;
     }
+    if (!exact && !release_checked) return;
+    // A release current of I0 spares the release log where no one reads the release time;
+    // without the exact rate or pulse checks the charge (and its log) is not needed either.
+    const double i_release = all || release_checked ? release_current_a : i0;
+    const Decay slow = clamp_math::decay(l, r_loop_slow, k.v.timing_v, i0, i_release, exact);
+    k.release_time_s = slow.release_time_s;
+    if (!exact) return;
+    k.current_zero_time_s = slow.end_time_s;
+    k.end_time_is_bound = false;
+    k.charge_c = slow.charge_c;
+    // Only the energy corner's charge and heat are used, never its release time.
+    const Decay hot = clamp_math::decay(l, r_loop_hot, vc_energy, i0, i0);
+    k.charge_peak_c = hot.charge_c;
+    k.energy_j = clamp_math::energy(hot, vc_energy, k.v.series_ohm);
+    if (rate_checked) set_rate_checks(k, p, c, diode_peak, slow, hot, k.energy_j, all, checks);
+    if (pulse_checked) set_pulse_check(k, spec, hot.charge_c, checks);
 }
 
 }  // namespace

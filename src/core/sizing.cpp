@@ -51,6 +51,7 @@ void evaluate_with(const Prepared& p, const D& d, const Conditions& c, double r_
     const bool all = figures == Figures::all;
     const Spec& spec = *p.spec;
     e.checks.clear_verdicts();
+    if (c.ta_lo_c != c.ta_hi_c) e.hot_checks.clear_verdicts();
     if (all) e.conditions = c;  // for the words; no check reads it
     coil_figures(spec, c, all, e.coil);
     stages::describe_driver(d, spec, r_drive_ohm, e.driver);
@@ -67,14 +68,15 @@ void evaluate_with(const Prepared& p, const D& d, const Conditions& c, double r_
         e.clamp.at[1] = e.clamp.at[0];
         e.timing.at[1] = e.timing.at[0];
     } else {
-        CheckSet hot;
+        CheckSet& hot = e.hot_checks;
         corner(p, d, c, r_drive_ohm, all, 1, fig, e, hot);
         for (std::size_t i = 0; i < check_count; ++i) {
             CheckValue& cold = e.checks.values[i];
+            CheckValue& h = hot.values[i];
             cold.corner = Corner::cold;
-            if (hot.values[i].verdict == Verdict::skip) continue;
-            hot.values[i].corner = Corner::hot;
-            if (&worse(cold, hot.values[i], !all) != &cold) CheckSet::assign(cold, hot.values[i]);
+            h.corner = Corner::hot;
+            if (h.verdict == Verdict::skip) continue;
+            if (&worse(cold, h, !all) != &cold) CheckSet::assign(cold, h);
         }
     }
     if (all) {

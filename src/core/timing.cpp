@@ -29,26 +29,34 @@ void timing_corner(const Spec& spec, const CoilCorner& coil, const DriverCorner&
         checks.set(CheckId::release_time, at_most(clamp.release_time_s, *spec.coil.max_release_time_s));
     }
     const bool switching = spec.switching.frequency_hz.has_value();
-    if ((all || switching) && spec.coil.inductance_h) {
-        // The hot coil at the lowest supply: the slowest rise to the operate current.
-        out.has_operate = true;
-        out.operate_time_s =
-            operate_time_s(*spec.coil.inductance_h, coil.r_hot_ohm, driver.coil_voltage_min_v, coil.operate_voltage_v);
-        out.operates = std::isfinite(out.operate_time_s);
-    }
-    if (!switching || !spec.coil.inductance_h) return;
-    // switching.timing (docs/method.md "Switching timing"): the coil current reaches zero before
-    // the next turn-on, t_end <= (1 - D)/f, and the on-time exceeds the operate time, t_op <= D/f.
-    const double period_s = 1.0 / *spec.switching.frequency_hz;
+    if (!spec.coil.inductance_h || !(all || switching)) return;
+    const double l = *spec.coil.inductance_h;
+    const double period_s = switching ? 1.0 / *spec.switching.frequency_hz : 0.0;
     const double on_s = spec.switching.duty * period_s;
     const double off_s = period_s - on_s;
+    // The hot coil at the lowest supply: the slowest rise to the operate current. For verdicts
+    // alone its bound tau V_op/(V - V_op) (ln(1/(1 - x)) <= x/(1 - x)) spares the log where it fits.
+    out.has_operate = true;
+    const double v = driver.coil_voltage_min_v;
+    const double v_op = coil.operate_voltage_v;
+    const double op_bound = v > v_op ? l / coil.r_hot_ohm * v_op / (v - v_op) : INFINITY;
+    out.operate_time_s = !all && op_bound <= on_s ? op_bound : operate_time_s(l, coil.r_hot_ohm, v, v_op);
+    out.operates = std::isfinite(out.operate_time_s);
+    if (!switching) return;
+    // switching.timing (docs/method.md "Switching timing"): the coil current reaches zero before
+    // the next turn-on, t_end <= (1 - D)/f, and the on-time exceeds the operate time, t_op <= D/f.
     CheckValue on = out.operates ? at_most(out.operate_time_s, on_s) : failed_without_value(on_s);
     on.detail = static_cast<std::uint8_t>(out.operates ? SwitchingCase::on_time : SwitchingCase::never_operates);
     if (!clamp.has_timing) {
         checks.set(CheckId::switching_timing, on);
         return;
     }
-    CheckValue off = at_most(clamp.current_zero_time_s, off_s);
+    double t_end = clamp.current_zero_time_s;
+    if (clamp.end_time_is_bound && t_end > off_s) {
+        // The bound does not fit: the exact time to zero, tau ln(1 + I0 R / Vc).
+        t_end = clamp.slow_vc_over_r_a > 0 ? clamp.slow_tau_s * std::log1p(clamp.i0_a / clamp.slow_vc_over_r_a) : INFINITY;
+    }
+    CheckValue off = at_most(t_end, off_s);
     off.detail = static_cast<std::uint8_t>(SwitchingCase::off_time);
     // The worse of the two stands (for verdicts alone, the failing one).
     const bool off_stands = all ? off.margin() < on.margin() : off.verdict == Verdict::fail;

@@ -64,10 +64,11 @@ void bm_evaluate(benchmark::State& state) {
 }
 BENCHMARK(bm_evaluate)->Name("sizing/evaluate")->Unit(benchmark::kNanosecond);
 
-void bm_yield(benchmark::State& state, Distribution distribution) {
+void bm_yield(benchmark::State& state, Distribution distribution, ConditionsMode conditions) {
     const Fixture& f = fixture();
     YieldSettings settings;
     settings.distribution = distribution;
+    settings.conditions = conditions;
     const double rb = f.design.r_drive_ohm.value_or(0.0);
     std::uint64_t first = 0;
     for (auto _ : state) {
@@ -77,8 +78,14 @@ void bm_yield(benchmark::State& state, Distribution distribution) {
     }
     state.SetItemsProcessed(static_cast<std::int64_t>(state.iterations()) * static_cast<std::int64_t>(yield_batch));
 }
-BENCHMARK_CAPTURE(bm_yield, uniform, Distribution::uniform)->Name("yield/one_core/uniform")->Unit(benchmark::kMillisecond);
-BENCHMARK_CAPTURE(bm_yield, normal, Distribution::normal)->Name("yield/one_core/normal")->Unit(benchmark::kMillisecond);
+// The default: conditions held at each check's worst corner (both ambient corners per sample).
+BENCHMARK_CAPTURE(bm_yield, uniform, Distribution::uniform, ConditionsMode::worst)
+    ->Name("yield/one_core/uniform")->Unit(benchmark::kMillisecond);
+BENCHMARK_CAPTURE(bm_yield, normal, Distribution::normal, ConditionsMode::worst)
+    ->Name("yield/one_core/normal")->Unit(benchmark::kMillisecond);
+// --conditions sampled (edition 1's yield): one ambient per sample.
+BENCHMARK_CAPTURE(bm_yield, sampled, Distribution::uniform, ConditionsMode::sampled)
+    ->Name("yield/one_core/uniform_sampled")->Unit(benchmark::kMillisecond);
 
 void bm_yield_all_cores(benchmark::State& state) {
     const Fixture& f = fixture();
@@ -176,6 +183,9 @@ int main(int argc, char** argv) {
     if (has("yield/one_core/uniform"))
         std::printf("  yield, one core, uniform     %8.2f million samples/s\n",
                     static_cast<double>(yield_batch) / s.at("yield/one_core/uniform") / 1e6);
+    if (has("yield/one_core/uniform_sampled"))
+        std::printf("  yield, one core, sampled     %8.2f million samples/s (--conditions sampled)\n",
+                    static_cast<double>(yield_batch) / s.at("yield/one_core/uniform_sampled") / 1e6);
     if (has("yield/one_core/normal"))
         std::printf("  yield, one core, normal      %8.2f million samples/s\n",
                     static_cast<double>(yield_batch) / s.at("yield/one_core/normal") / 1e6);

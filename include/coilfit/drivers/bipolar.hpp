@@ -50,6 +50,9 @@ struct BipolarDriver {
     double resistor_power_limit_w = 0;
     double pin_r_out_ohm = 0;
     double internal_rbe_ohm = 0;  // 0: none
+    // The gain's temperature factor at the spec's two ambients, worked out once (a pow each).
+    double gain_ta_c[2] = {25.0, 25.0};
+    double gain_factor[2] = {1.0, 1.0};
 };
 
 [[nodiscard]] BipolarDriver prepare_bipolar(const Spec& spec, const Bipolar& part, double pin_r_out_ohm);

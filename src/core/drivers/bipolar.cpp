@@ -19,6 +19,12 @@ constexpr double vbe_tempco_v_per_k = 0.002;
 // The gain temperature exponent of common small-signal models, from memory.
 constexpr double hfe_exponent_default = 1.5;
 
+// hFE_min(T) = hFE_min(25 °C) (T/298.15 K)^x below 25 °C; above it the 25 °C value.
+double gain_temperature_factor(const Bipolar& part, double ambient_c) {
+    if (!(ambient_c < data_temp_c)) return 1.0;
+    return std::pow((ambient_c + kelvin_offset) / (data_temp_c + kelvin_offset), part.hfe_temp_exponent.value_or(hfe_exponent_default));
+}
+
 double forced_gain_policy(const Spec& spec, const Bipolar& part, double test_ratio) {
     if (spec.policy.forced_gain) return *spec.policy.forced_gain;
     // Common practice: datasheets specify Vce(sat) at Ic/Ib = 10, the textbook ratio for hard
@@ -39,6 +45,11 @@ BipolarDriver prepare_bipolar(const Spec& spec, const Bipolar& part, double pin_
     d.resistor_power_limit_w = spec.policy.power_derating * spec.base_resistor.power_rating_w;
     d.pin_r_out_ohm = pin_r_out_ohm;
     d.internal_rbe_ohm = part.r_be_internal_ohm.value_or(0.0);
+    const double ambients[2] = {spec.ambient.min_c, spec.ambient.max_c};
+    for (std::size_t k = 0; k < 2; ++k) {
+        d.gain_ta_c[k] = ambients[k];
+        d.gain_factor[k] = gain_temperature_factor(part, ambients[k]);
+    }
     return d;
 }
 
@@ -59,11 +70,9 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
     // Vbe low falls by 2 mV/K away from 25 °C; Vce(sat) stays at its 25 °C limit.
     const double below_25 = std::max(0.0, data_temp_c - in.ambient_c);
     const double above_25 = std::max(0.0, in.ambient_c - data_temp_c);
-    double gain_factor = 1.0;
-    if (below_25 > 0) {
-        gain_factor = std::pow((in.ambient_c + kelvin_offset) / (data_temp_c + kelvin_offset),
-                               tr.hfe_temp_exponent.value_or(hfe_exponent_default));
-    }
+    const double gain_factor = in.ambient_c == d.gain_ta_c[0]   ? d.gain_factor[0]
+                               : in.ambient_c == d.gain_ta_c[1] ? d.gain_factor[1]
+                                                                : gain_temperature_factor(tr, in.ambient_c);
     f.hfe_min = f.hfe_lookup.value * gain_factor;
     f.hfe = f.hfe_min;
     if (c.hfe_position > 0) {
