@@ -1,4 +1,4 @@
-// The flyback clamp and release timing (include/coilfit/clamp.hpp, method.md "Clamp (flyback)
+// The flyback clamp and release timing (include/coilfit/clamp.hpp, src/method.md "Clamp (flyback)
 // and timing"): the closed forms against a numerical integration of the RL decay, the clamp
 // voltages of each option, "none", the missing-inductance note and the trade-off table.
 #include <doctest/doctest.h>
@@ -103,7 +103,7 @@ const DecayCase decay_cases[] = {
 
 TEST_SUITE("clamp") {
     TEST_CASE("the closed-form release time, end time and clamp charge agree with an RK4 integration to 0.1 %") {
-        // Closed form (method.md): t_rel = tau ln((I0 + Vc/R)/(I_rel + Vc/R)), t_end = tau ln(1 + I0 R/Vc),
+        // Closed form (src/method.md): t_rel = tau ln((I0 + Vc/R)/(I_rel + Vc/R)), t_end = tau ln(1 + I0 R/Vc),
         // Q = tau I0 - (Vc/R) t_end; reference: RK4 of L di/dt = -(R i + Vc) written in this test.
         for (const DecayCase& c : decay_cases) {
             INFO(c.what);
@@ -202,7 +202,7 @@ TEST_SUITE("clamp") {
         const double drift_cold = zr.vz_tempco_v_per_k.value_or(0) * (0.0 - 25.0);
         const double vz_peak = 12.0 * 1.05 + zr.zzt_ohm.value_or(0) * (i0 - zr.izt_a.value_or(i0)) + std::max(drift_hot, 0.0);
         CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + vz_peak + vf_max));
-        // Closed form (method.md) with Vc = Vz_lo + vf_low, worked here independently.
+        // Closed form (src/method.md) with Vc = Vz_lo + vf_low, worked here independently.
         const double vc = 12.0 * 0.95 + std::min(drift_cold, 0.0) + 0.6;
         const double tau = 0.9 / r_cold;
         CHECK(test::flat(z.worst).release_time_s == Approx(tau * std::log((i0 + vc / r_cold) / (i_rel + vc / r_cold))));

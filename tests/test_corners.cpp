@@ -1,4 +1,4 @@
-// Method edition 2, drive side (docs/method.md "Corners", "Coil", "Data limits"): asymmetric
+// Method edition 2, drive side (src/method.md "Corners", "Coil", "Data limits"): asymmetric
 // supplies and transients, the must-operate temperature, the coil's self-heating fixed point, and
 // part values beyond the part's data.
 #include <doctest/doctest.h>
@@ -85,7 +85,7 @@ TEST_SUITE("corners") {
     }
 
     TEST_CASE("the must-operate voltage scales from the temperature the data state it at") {
-        // V_op(T) = k V_rated (1 + alpha (T - T_ref)) / (1 + alpha (T_mo - T_ref)) (docs/method.md "Coil").
+        // V_op(T) = k V_rated (1 + alpha (T - T_ref)) / (1 + alpha (T_mo - T_ref)) (src/method.md "Coil").
         CoilSpec coil;
         coil.rated_voltage_v = 12.0;
         coil.reference_temp_c = 20.0;

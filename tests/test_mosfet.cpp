@@ -1,4 +1,4 @@
-// The logic-level N-MOSFET driver (include/coilfit/drivers/mosfet.hpp, docs/method.md
+// The logic-level N-MOSFET driver (include/coilfit/drivers/mosfet.hpp, src/method.md
 // "N-MOSFET driver (nmos)"): hand-worked cases against closed forms and an iteration done here.
 #include <doctest/doctest.h>
 
@@ -117,7 +117,7 @@ TEST_SUITE("mosfet") {
     }
 
     TEST_CASE("the hot on-resistance in closed form equals the fixed point of Rds(Tj) and Tj = Ta + I^2 Rds RthJA") {
-        // Closed form (docs/method.md) against an iteration done here.
+        // Closed form (src/method.md) against an iteration done here.
         for (const double i : {0.5, 2.0, 4.0}) {
             for (const double ta : {-20.0, 25.0, 70.0}) {
                 const double r25 = 0.08, tc = 0.006, rth = 62.5;

@@ -1,4 +1,4 @@
-// Method edition 2, clamp and timing (docs/method.md "Clamp (flyback) and timing", "Switching
+// Method edition 2, clamp and timing (src/method.md "Clamp (flyback) and timing", "Switching
 // timing"): zener and TVS pulse ratings, the diode's repetitive current rating, the clamp
 // resistor's tolerance and the switching timing.
 #include <doctest/doctest.h>
@@ -51,7 +51,7 @@ TEST_SUITE("pulse") {
         const Check* p = zener.find_check("clamp.pulse");
         REQUIRE(p != nullptr);
         CHECK(p->verdict == Verdict::fail);
-        // P_pk = Vz_hi I0 against d_pulse P_rated(t_p), t_p = Q / I0 (docs/method.md).
+        // P_pk = Vz_hi I0 against d_pulse P_rated(t_p), t_p = Q / I0 (src/method.md).
         const Evaluation& e = zener.sized.worst;
         const ClampCorner& k = e.clamp_at(e.check(CheckId::clamp_pulse).corner);
         CHECK(k.pulse_peak_w == Approx(k.v.part_peak_v * k.i0_a));
@@ -121,7 +121,7 @@ TEST_SUITE("pulse") {
     }
 
     TEST_CASE("a 100 Hz greenhouse valve fails switching.timing; at 1 Hz it passes") {
-        // t_end = tau ln(1 + I0 R / Vc) must fit in the off-time (1 - D)/f (docs/method.md).
+        // t_end = tau ln(1 + I0 R / Vc) must fit in the off-time (1 - D)/f (src/method.md).
         Spec s = test::load_example("greenhouse-valve.json");
         s.switching.frequency_hz = 100.0;
         const SizingReport fast = size(s, table().catalogue);

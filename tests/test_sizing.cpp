@@ -91,7 +91,7 @@ TEST_SUITE("sizing") {
     }
 
     TEST_CASE("the base resistor is the largest E24 value that saturates at both ambient corners") {
-        // Hand-worked at -20 °C and 60 °C (docs/method.md "Bipolar drivers", edition 2): at the
+        // Hand-worked at -20 °C and 60 °C (src/method.md "Bipolar drivers", edition 2): at the
         // cold corner hFE_min falls as (T/298.15 K)^1.5 (from memory: the gain exponent of common
         // small-signal models) and Vbe(sat) rises 2 mV/K below 25 °C; at the hot corner Vbe low
         // falls 2 mV/K above 25 °C (common practice, the -2 mV/K junction coefficient).
@@ -126,7 +126,7 @@ TEST_SUITE("sizing") {
     }
 
     TEST_CASE("hand-worked corners at -40 °C and 85 °C: gain, Vbe(sat), window, pin current and operate") {
-        // docs/method.md edition 2: hFE x (233.15/298.15)^1.5 = 0.69 at -40 °C (from memory, the
+        // src/method.md edition 2: hFE x (233.15/298.15)^1.5 = 0.69 at -40 °C (from memory, the
         // exponent 1.5), Vbe(sat) + 2 mV/K x 65 K = +130 mV; at 85 °C Vbe low 0.6 V - 120 mV.
         Spec s = hand_spec();
         s.ambient = {-40.0, 85.0};
@@ -161,7 +161,7 @@ TEST_SUITE("sizing") {
         s.pulldown_ohm = 47e3;
         const Sized z = size_numbers(s);
         const double i_max = 13.2 / (360.0 * (1.0 + alpha * 5.0));
-        // Thevenin from the supply VOH is stated at, by default the lowest VDD (docs/method.md
+        // Thevenin from the supply VOH is stated at, by default the lowest VDD (src/method.md
         // edition 2): (3.135 - 2.9) / 8 mA = 29.4 Ω.
         const double r_out = (3.135 - 2.9) / 0.008;
         const double rb_max = ((3.135 - 0.9) / (i_max / 10.0 + 0.9 / 47e3) - r_out) / 1.05;
@@ -312,7 +312,7 @@ TEST_SUITE("sizing") {
     }
 
     TEST_CASE("a check's margin is its headroom as a fraction of the limit") {
-        // Definition (method.md, "Report"): (limit - value)/|limit| for an upper bound,
+        // Definition (src/method.md, "Report"): (limit - value)/|limit| for an upper bound,
         // (value - limit)/|limit| for a lower one.
         using Bound = CheckValue::Bound;
         CHECK(CheckValue{9.0, 10.0, Verdict::pass, Bound::at_most, true}.margin() == Approx(0.1));

@@ -2,7 +2,7 @@
 // report: the netlist of src/io/netlist.cpp is run with `ngspice -b` and its .meas results are
 // compared with the report's coil current, peak collector voltage and release time.
 //
-// Agreement asked for (issue 7, method.md "Clamp (flyback) and timing"): coil current within
+// Agreement asked for (issue 7, src/method.md "Clamp (flyback) and timing"): coil current within
 // 2 %; peak and release time on the safe side of the simulation: the report's figure not below
 // the simulated one by more than 1 %, and above it by no more than 0.5 V (peak) and 10 %
 // (release time). ngspice is a CI dependency (.ci/run installs it): without it these tests FAIL.

@@ -308,7 +308,7 @@ TEST_SUITE("yield") {
     }
 
     TEST_CASE("by default the conditions stay at each check's worst corner: a design failing only at the lowest supply yields 0 %") {
-        // docs/method.md "Statistical yield": yield is about part-to-part spread. The marginal
+        // src/method.md "Statistical yield": yield is about part-to-part spread. The marginal
         // design fails coil.operate at the lowest supply with a hot coil; every unit meets that
         // supply, so none is guaranteed: 0 % held at the corner, clearly more with the
         // conditions drawn (edition 1's --conditions sampled).

@@ -2,7 +2,7 @@
 // check's numbers (CheckValue) and a fixed-capacity set of them (no allocation).
 //
 // A check is one row of the table in src/core/check.cpp plus one function in the stage that
-// owns it; the words it prints live with that stage (docs/method.md names the formulas).
+// owns it; the words it prints live with that stage (src/method.md names the formulas).
 #pragma once
 
 #include <array>
@@ -62,7 +62,7 @@ struct CheckInfo {
 [[nodiscard]] Unit check_unit(CheckId id);
 [[nodiscard]] constexpr std::size_t index_of(CheckId id) { return static_cast<std::size_t>(id); }
 
-// The ambient corner a figure or check was taken at (docs/method.md "Two ambient corners").
+// The ambient corner a figure or check was taken at (src/method.md "Two ambient corners").
 enum class Corner : std::uint8_t { cold = 0, hot = 1 };
 inline constexpr std::size_t corner_count = 2;
 
@@ -116,7 +116,7 @@ struct CheckValue {
     c.limit = limit;
     return c;
 }
-// The direction rule (docs/method.md "Data limits"): a check that uses a value beyond the part's
+// The direction rule (src/method.md "Data limits"): a check that uses a value beyond the part's
 // data on its unsafe side passes only as a warning ("beyond the part's data").
 void mark_beyond_data(CheckValue& c);
 

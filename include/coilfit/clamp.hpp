@@ -1,5 +1,5 @@
 // The clamp stage: the flyback clamp across the coil, the peak collector (drain) voltage, the RL
-// decay, the clamp's ratings (docs/method.md "Clamp (flyback) and timing").
+// decay, the clamp's ratings (src/method.md "Clamp (flyback) and timing").
 //
 // At turn-off the coil keeps its current I0 and drives the collector up until the clamp
 // conducts; with a clamp voltage Vc held constant the coil current decays as
@@ -75,7 +75,7 @@ struct ClampCorner {
     bool end_time_is_bound = false;  // verdicts only: current_zero_time_s is the bound L I0 / Vc
     double energy_j = 0, charge_peak_c = 0;                            // energy corner
     double avalanche_j = 0;        // no clamp, a MOSFET rated for it: the energy per turn-off
-    // The pulse each turn-off drives into a zener or TVS (docs/method.md, pulse rating).
+    // The pulse each turn-off drives into a zener or TVS (src/method.md, pulse rating).
     bool has_pulse = false;
     double pulse_peak_w = 0, pulse_energy_j = 0, pulse_width_s = 0, pulse_rating_w = 0;
     bool has_rate = false;         // and a switching frequency

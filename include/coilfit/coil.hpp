@@ -1,6 +1,6 @@
 // The coil stage: the winding's resistance, current, temperature and must-operate voltage at
 // one ambient corner, and the coil's checks (coil.operate, coil.overvoltage, coil.thermal)
-// (docs/method.md "Coil").
+// (src/method.md "Coil").
 #pragma once
 
 #include <array>

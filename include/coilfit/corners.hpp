@@ -1,4 +1,4 @@
-// The ranges a design must work over (docs/method.md "Corners"). The worst case takes every
+// The ranges a design must work over (src/method.md "Corners"). The worst case takes every
 // band; a Monte Carlo sample collapses the part spreads (and, when conditions are sampled, the
 // operating conditions too) to one point each (lo == hi). Samples vary parts and conditions,
 // never the design's choices (the resistor's nominal value, the parts).

@@ -1,4 +1,4 @@
-// The policy defaults of the method (docs/method.md), written once: the spec's struct
+// The policy defaults of the method (src/method.md), written once: the spec's struct
 // initialisers, the report's "default used" notes and the command line's help all read them here.
 #pragma once
 
@@ -6,7 +6,7 @@ namespace coilfit::defaults {
 
 // Corners
 inline constexpr double supply_tolerance = 0.10;
-inline constexpr double ambient_min_c = 0.0;  // commercial grade (docs/method.md "Corners")
+inline constexpr double ambient_min_c = 0.0;  // commercial grade (src/method.md "Corners")
 inline constexpr double ambient_max_c = 70.0;
 inline constexpr double pin_vdd_tolerance = 0.05;
 
@@ -40,14 +40,14 @@ inline constexpr double pulse_derating = 0.50;
 // Below a zener's test current without Zzt: 10 % off its bottom tolerance (common practice).
 inline constexpr double zener_knee_factor = 0.90;
 
-// N-MOSFET drive (docs/method.md "N-MOSFET driver")
+// N-MOSFET drive (src/method.md "N-MOSFET driver")
 inline constexpr double nmos_pulldown_ohm = 100e3;
 inline constexpr double rds_on_tempco_per_k = 0.006;  // from memory: Rds(on) x1.5-1.7 at 125 °C
 inline constexpr double vgs_th_tempco_v_per_k = 0.004;  // from memory: Vgs(th) falls about 4 mV/K
 inline constexpr double vplateau_above_threshold_v = 1.0;
 inline constexpr double slow_gate_s = 10e-6;
 
-// Transistor-array channel (docs/method.md "Transistor-array channel")
+// Transistor-array channel (src/method.md "Transistor-array channel")
 inline constexpr double array_vin_low_v = 1.2;  // two Vbe at their low (common practice)
 inline constexpr double array_input_tolerance = 0.20;
 

@@ -1,5 +1,5 @@
 // The driver: the switch between the coil and ground, and its drive from the pin. One variant per
-// kind (docs/method.md "The circuit"): bipolar (npn, darlington; base resistor), nmos (gate
+// kind (src/method.md "The circuit"): bipolar (npn, darlington; base resistor), nmos (gate
 // resistor), array (one channel of a sink array). Everything after the driver stage (clamp,
 // timing, yield, pick, the renderers) sees only DriverCommon; a driver's own figures are in its
 // header under coilfit/drivers/.

@@ -1,11 +1,11 @@
 // Part records and the catalogue that holds them: one record type per kind of part
-// (docs/method.md, "The circuit"; the table on disk is read in src/io/parts_*.cpp).
+// (src/method.md, "The circuit"; the table on disk is read in src/io/parts_*.cpp).
 //
 // Records hold datasheet limits in SI units. Characteristic tables (minimum gain, Vce(sat),
 // Vbe(sat), forward drop, ...) are lists of points; a value between points is interpolated
 // linearly on log(current); outside them the nearest point is used and the lookup says on which
 // side the operating point lay, so that the stage using it can apply the direction rule of
-// docs/method.md "Data limits".
+// src/method.md "Data limits".
 #pragma once
 
 #include <limits>

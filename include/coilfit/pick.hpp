@@ -1,5 +1,5 @@
 // Which parts of the table would work? Sizes the spec afresh with every transistor of every
-// driver kind (and, for diode clamps, every diode) and ranks the combinations (docs/method.md
+// driver kind (and, for diode clamps, every diode) and ranks the combinations (src/method.md
 // "Bipolar drivers", "Data limits"): passing first; within their data before beyond it; then by
 // robustness, most robust first: a bipolar design by its base resistor window ratio Rb_max/Rb_min
 // and then by the smallest margin of its checks other than saturation (a resistor at the

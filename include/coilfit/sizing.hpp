@@ -2,7 +2,7 @@
 // (coil -> driver -> clamp -> timing) at the ambient corners, and the design's choice of drive
 // resistor.
 //
-// Modelling assumptions (docs/method.md is the contract; the source of each formula is beside it
+// Modelling assumptions (src/method.md is the contract; the source of each formula is beside it
 // in the stage that owns it, src/core/<stage>.cpp):
 //  1. Every check is made at the corner worst for it (extreme-value analysis), from the
 //     tolerance bands of supply, pin VDD, coil resistance, drive resistor and zener, and the

@@ -1,5 +1,5 @@
 // The timing stage: the release time against its limit, the operate time of the current, and
-// the switching timing at a frequency (docs/method.md "Clamp (flyback) and timing",
+// the switching timing at a frequency (src/method.md "Clamp (flyback) and timing",
 // "Switching timing").
 #pragma once
 

@@ -74,7 +74,7 @@ using BandPositions = std::array<double, yield_input_count>;
 
 // The point of the worst-case box at the given positions: every range collapsed (lo == hi).
 // How a sample treats the operating conditions (supply, ambient, pin VDD): held at each check's
-// worst corner (the default: yield asks about part-to-part spread, docs/method.md "Statistical
+// worst corner (the default: yield asks about part-to-part spread, src/method.md "Statistical
 // yield"), or drawn like the part spreads (edition 1's behaviour).
 enum class ConditionsMode : std::uint8_t { worst, sampled };
 [[nodiscard]] std::string_view conditions_mode_name(ConditionsMode m);  // "worst", "sampled"

@@ -1,4 +1,4 @@
-// The clamp stage's numbers (docs/method.md "Clamp (flyback) and timing"); words in
+// The clamp stage's numbers (src/method.md "Clamp (flyback) and timing"); words in
 // clamp_words.cpp.
 #include "coilfit/clamp.hpp"
 
@@ -92,7 +92,7 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
 }
 
 // clamp.pulse: the zener's (or TVS's) peak power P_pk = V I0 against d_pulse P_rated(t_p), with
-// the pulse's equivalent rectangular width t_p = E/P_pk = Q/I0 (docs/method.md, pulse rating).
+// the pulse's equivalent rectangular width t_p = E/P_pk = Q/I0 (src/method.md, pulse rating).
 // True unless it fails.
 bool set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet& checks) {
     const bool tvs = spec.clamp.type == ClampType::diode_tvs;
@@ -187,7 +187,7 @@ void prepare_clamp(const Spec& spec, Prepared& p) {
     p.clamp_diode = &d;
     p.derated_vrrm_v = spec.policy.voltage_derating * d.vrrm_v;
     // Repetitive switching: the repetitive peak rating IFRM when given, else IF(AV); the 8.3 ms
-    // non-repetitive surge rating IFSM is never a limit here (docs/method.md, diode checks).
+    // non-repetitive surge rating IFSM is never a limit here (src/method.md, diode checks).
     p.diode_peak_limit_a = d.ifrm_a ? *d.ifrm_a : d.if_avg_a;
     p.diode_rated_power_w = d.if_avg_a * vf_max_at(d, d.if_avg_a).value;
 }
@@ -204,7 +204,7 @@ void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln
     k.has_pulse = false;
     if (!k.v.limited) {
         // No clamp: only breakdown limits the voltage. A MOSFET rated for repetitive avalanche
-        // takes E = 1/2 L I0^2 V_BR / (V_BR - Vs_hi) per turn-off against d_P EAR (docs/method.md
+        // takes E = 1/2 L I0^2 V_BR / (V_BR - Vs_hi) per turn-off against d_P EAR (src/method.md
         // "N-MOSFET driver", no clamp); any other switch fails.
         k.avalanche_j = 0;
         if (driver.avalanche_j > 0 && spec.coil.inductance_h) {

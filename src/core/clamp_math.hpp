@@ -13,7 +13,7 @@
 
 namespace coilfit::clamp_math {
 
-// A zener's voltage at the coil current (docs/method.md "Clamp (flyback) and timing"): for the
+// A zener's voltage at the coil current (src/method.md "Clamp (flyback) and timing"): for the
 // peak its top tolerance plus Zzt (I0 - Izt) above its test current; for timing its bottom
 // tolerance, below its test current lowered for the knee by Zzt (Izt - I0), or to 90 % without
 // Zzt. With vz_tempco the drift from its 25 °C data is taken where it is worst over the
@@ -70,7 +70,7 @@ inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, const Conditi
     case ClampType::diode_tvs: {
         const Tvs& t = *clamp.tvs;
         // Vc(I0) linear in current from Vbr max at 1 mA to the clamping voltage at Ipp, the same
-        // line beyond Ipp (docs/method.md "TVS clamp"); timing with the lowest breakdown.
+        // line beyond Ipp (src/method.md "TVS clamp"); timing with the lowest breakdown.
         constexpr double i_br_a = 1e-3;
         const double slope = t.ipp_a > i_br_a ? (t.vc_v - t.vbr_max_v) / (t.ipp_a - i_br_a) : 0.0;
         out.part_peak_v = t.vbr_max_v + slope * std::max(0.0, i0_a - i_br_a);

@@ -1,6 +1,6 @@
 // The clamp trade-off table: the spec's diode alone, with its resistor, and with the highest
 // zeners of the table that keep the collector within its rating, side by side
-// (docs/method.md "Clamp (flyback) and timing": faster release costs collector voltage).
+// (src/method.md "Clamp (flyback) and timing": faster release costs collector voltage).
 #include <algorithm>
 #include <cmath>
 

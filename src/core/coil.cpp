@@ -1,4 +1,4 @@
-// The coil stage (docs/method.md "Coil"): copper law IEC 60028, the must-operate voltage as an
+// The coil stage (src/method.md "Coil"): copper law IEC 60028, the must-operate voltage as an
 // ampere-turn threshold, the winding's self-heating as a fixed point.
 #include "coilfit/coil.hpp"
 
@@ -28,7 +28,7 @@ double coil_rise_k(double v_coil_v, double r_ref_lo_ohm, double t_ref_c, double 
 
 double operate_voltage_v(const CoilSpec& coil, double t_coil_c) {
     // V_op(T) = k_op V_rated (1 + alpha (T - T_ref)) / (1 + alpha (T_mo - T_ref)): the ampere-turn
-    // threshold of the winding, stated at T_mo (docs/method.md "Coil"); tR is not applied again.
+    // threshold of the winding, stated at T_mo (src/method.md "Coil"); tR is not applied again.
     const double t_mo = coil.must_operate_temp_c.value_or(coil.reference_temp_c);
     return coil.must_operate * coil.rated_voltage_v * copper_factor(coil.reference_temp_c, t_coil_c) /
            copper_factor(coil.reference_temp_c, t_mo);
@@ -69,7 +69,7 @@ void coil_figures(const Spec& spec, const Conditions& c, bool both, CoilFigures&
 void coil_checks(const CoilSpec& coil, const CoilCorner& k, const DriverCorner& driver, double coil_voltage_max_v,
                  CheckSet& out) {
     CheckValue op = at_least(driver.coil_voltage_min_v, k.operate_voltage_v);
-    // The direction rule (docs/method.md "Data limits"): a drop taken beyond the part's data.
+    // The direction rule (src/method.md "Data limits"): a drop taken beyond the part's data.
     if (driver.drop_beyond_data) mark_beyond_data(op);
     out.set(CheckId::coil_operate, op);
     if (coil.max_voltage_v) out.set(CheckId::coil_overvoltage, at_most(coil_voltage_max_v, *coil.max_voltage_v));

@@ -80,7 +80,7 @@ inline Lookup vbe_sat_at(const Bipolar& part, double ic_a, double ln_ic) {
 
 // Above its highest point Vf is extrapolated on log(current) from the last two points, or from
 // one point by the diode law with emission coefficient 2, + 2 * 26 mV * ln(I / I_pt) (common
-// practice; docs/method.md "Data limits"); below its lowest point the nearest is used (safe: Vf
+// practice; src/method.md "Data limits"); below its lowest point the nearest is used (safe: Vf
 // falls with current).
 inline constexpr double vf_one_point_slope_v = 2.0 * 0.026;
 

@@ -9,7 +9,7 @@ namespace coilfit::stages {
 double pin_output_resistance(const Spec& spec) {
     // The pin as a Thevenin source: R_out = (VDD_voh - VOH) / IOH, VDD_voh the supply VOH is
     // guaranteed at (pin.voh_vdd, by default the lowest VDD, as pin data state it)
-    // (docs/method.md "Bipolar drivers").
+    // (src/method.md "Bipolar drivers").
     if (spec.pin.voh_v && spec.pin.voh_current_a && *spec.pin.voh_current_a > 0) {
         const double vdd_voh = spec.pin.voh_vdd_v.value_or(spec.pin.vdd_v * (1.0 - spec.pin.vdd_tolerance));
         return std::max(0.0, (vdd_voh - *spec.pin.voh_v) / *spec.pin.voh_current_a);

@@ -24,7 +24,7 @@ void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Size
         notes.push_back("forced gain taken from the Darlington's Vce(sat) test ratio, " + n(k.forced_gain_policy) + ", instead of 10");
     }
     const std::string id = display_id(tr);
-    // The direction rule (docs/method.md "Data limits"): below its points Vce(sat) and Vbe(sat)
+    // The direction rule (src/method.md "Data limits"): below its points Vce(sat) and Vbe(sat)
     // are on their safe side; beyond them, and hFE on either side, the checks using them warn.
     if (k.hfe_lookup.side != Side::within) {
         notes.push_back("the operating point" + at + " lies beyond " + id + "'s hFE points; the nearest point was used, "
@@ -47,7 +47,7 @@ void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Size
                         " is looser, so the coil voltage figure is not guaranteed; set policy.forced_gain to " +
                         n(k.vce_sat_test_ratio) + " for a guaranteed Vce(sat)");
     }
-    // The 25 °C data corrected at the corners (docs/method.md "Bipolar drivers", Temperature).
+    // The 25 °C data corrected at the corners (src/method.md "Bipolar drivers", Temperature).
     const BipolarCorner& cold = f.at[0];
     if (cold.hfe_min < cold.hfe_lookup.value * (1.0 - 1e-12)) {
         notes.push_back("at the cold corner (" + q(sized.conditions.ta_lo_c, Unit::celsius) + ") the 25 °C data are corrected: hFE min x " +

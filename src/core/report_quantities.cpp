@@ -45,7 +45,7 @@ void bipolar_quantities(Q& qs, const Spec& spec, const Sized& sized, const Bipol
     add(qs, "pin_output_resistance_ohm", f.pin_r_out_ohm, Unit::ohm, "pin output resistance");
     add(qs, "base_resistor_max_ohm", f.window_max_ohm, Unit::ohm, "base resistor, largest that saturates");
     add(qs, "base_resistor_min_ohm", f.window_min_ohm, Unit::ohm, "base resistor, smallest the pin can carry");
-    // The window's robustness (docs/method.md "Bipolar drivers"): Rb_max / Rb_min.
+    // The window's robustness (src/method.md "Bipolar drivers"): Rb_max / Rb_min.
     if (f.window_min_ohm > 0 && f.window_max_ohm > 0) {
         add(qs, "base_resistor_window_ratio", f.window_max_ohm / f.window_min_ohm, Unit::number,
             "base resistor window, largest over smallest");

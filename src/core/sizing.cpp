@@ -1,5 +1,5 @@
 // Sequences the stages (coil -> driver -> clamp -> timing) at both ambient corners and keeps,
-// for every check, the worse of the two (docs/method.md "Two ambient corners"). The formulas
+// for every check, the worse of the two (src/method.md "Two ambient corners"). The formulas
 // live in the stages' files.
 #include "coilfit/sizing.hpp"
 

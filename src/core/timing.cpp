@@ -1,4 +1,4 @@
-// The timing stage (docs/method.md "Clamp (flyback) and timing", "Switching timing").
+// The timing stage (src/method.md "Clamp (flyback) and timing", "Switching timing").
 #include "coilfit/timing.hpp"
 
 #include <cmath>
@@ -43,7 +43,7 @@ void timing_corner(const Spec& spec, const CoilCorner& coil, const DriverCorner&
     out.operate_time_s = !all && op_bound <= on_s ? op_bound : operate_time_s(l, coil.r_hot_ohm, v, v_op);
     out.operates = std::isfinite(out.operate_time_s);
     if (!switching) return;
-    // switching.timing (docs/method.md "Switching timing"): the coil current reaches zero before
+    // switching.timing (src/method.md "Switching timing"): the coil current reaches zero before
     // the next turn-on, t_end <= (1 - D)/f, and the on-time exceeds the operate time, t_op <= D/f.
     CheckValue on = out.operates ? at_most(out.operate_time_s, on_s) : failed_without_value(on_s);
     on.detail = static_cast<std::uint8_t>(out.operates ? SwitchingCase::on_time : SwitchingCase::never_operates);

@@ -1,5 +1,5 @@
 // One channel of a transistor-array sink (array): a built-in input resistor, an output that
-// saturates to Vce(sat), a built-in clamp diode to a common pin (docs/method.md
+// saturates to Vce(sat), a built-in clamp diode to a common pin (src/method.md
 // "Transistor-array channel (array)"). The package's shared limits belong to the board.
 #pragma once
 

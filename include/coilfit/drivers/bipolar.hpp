@@ -1,5 +1,5 @@
 // The bipolar driver (npn, darlington): base resistor from the pin, saturation at the weakest
-// corner, the pin current at the strongest (docs/method.md "Bipolar drivers").
+// corner, the pin current at the strongest (src/method.md "Bipolar drivers").
 #pragma once
 
 #include <array>

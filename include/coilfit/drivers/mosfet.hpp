@@ -1,6 +1,6 @@
 // The logic-level N-MOSFET driver (nmos): gate resistor from the pin, a pull-down from gate to
 // source, Rds(on) at the gate voltage the pin guarantees and at the junction temperature its own
-// dissipation gives (docs/method.md "N-MOSFET driver (nmos)").
+// dissipation gives (src/method.md "N-MOSFET driver (nmos)").
 #pragma once
 
 #include <array>

@@ -1,4 +1,4 @@
-// One channel of a transistor array (docs/method.md "Transistor-array channel (array)").
+// One channel of a transistor array (src/method.md "Transistor-array channel (array)").
 #include "coilfit/drivers/array.hpp"
 
 #include <algorithm>
@@ -32,7 +32,7 @@ void array_corner(const ArrayDriver& d, const Spec& spec, const Conditions& c, c
     checks.set(CheckId::pin_current, at_most(f.pin_current_max_a, spec.pin.max_current_a));
     // The lowest pin voltage must reach the input voltage that guarantees the output on.
     CheckValue drive = at_least(c.vdd_lo_v, f.vin_on.value);
-    if (f.vin_on.side == Side::above) mark_beyond_data(drive);  // docs/method.md "Data limits"
+    if (f.vin_on.side == Side::above) mark_beyond_data(drive);  // src/method.md "Data limits"
     checks.set(CheckId::input_drive, drive);
     checks.set(CheckId::transistor_current, at_most(i, d.derated_ic_a));
     // One channel alone: P = Vce(sat) I, Tj = Ta + P RthJA (the board adds the package's sum).

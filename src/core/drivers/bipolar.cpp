@@ -1,4 +1,4 @@
-// The bipolar driver's numbers (docs/method.md "Bipolar drivers"); its words are in
+// The bipolar driver's numbers (src/method.md "Bipolar drivers"); its words are in
 // bipolar_words.cpp.
 #include "coilfit/drivers/bipolar.hpp"
 
@@ -11,7 +11,7 @@
 namespace coilfit {
 namespace {
 
-// Device data are 25 °C values (docs/method.md "Bipolar drivers", Temperature).
+// Device data are 25 °C values (src/method.md "Bipolar drivers", Temperature).
 constexpr double data_temp_c = 25.0;
 constexpr double kelvin_offset = 273.15;
 // Vbe falls about 2 mV/K (common practice: the junction's -2 mV/K coefficient).
@@ -103,7 +103,7 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
     }
     checks.set(CheckId::transistor_current, at_most(i, d.derated_ic_a));
 
-    // The thermal check's own corner may carry another current (docs/method.md: the hot corner).
+    // The thermal check's own corner may carry another current (src/method.md: the hot corner).
     const double i_th = in.thermal_current_a;
     const Lookup vce_th_lookup = i_th == i ? f.vce_lookup : curves::vce_sat_at(tr, i_th, ln_not_set);
     const double vce_th = vce_th_lookup.value;

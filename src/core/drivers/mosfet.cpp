@@ -1,4 +1,4 @@
-// The nmos driver's numbers (docs/method.md "N-MOSFET driver (nmos)"); words in mosfet_words.cpp.
+// The nmos driver's numbers (src/method.md "N-MOSFET driver (nmos)"); words in mosfet_words.cpp.
 #include "coilfit/drivers/mosfet.hpp"
 
 #include <algorithm>
