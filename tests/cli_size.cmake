@@ -22,7 +22,6 @@ endfunction()
 coilfit_cli_case(version 0 ARGS --version STDOUT_MATCH "^coilfit [0-9]+\\.[0-9]+\\.[0-9]+")
 coilfit_cli_case(help 0 ARGS --help STDOUT_MATCH "size")
 coilfit_cli_case(size-help 0 ARGS size --help STDOUT_MATCH "--coil-resistance")
-coilfit_cli_case(no-subcommand 2 ARGS "" STDERR_MATCH "subcommand")
 coilfit_cli_case(unknown-flag 2 ARGS size ${ex}/greenhouse-valve.json --suply 12V STDERR_MATCH "--suply")
 coilfit_cli_case(no-spec 2 ARGS size
   STDERR_EXACT "coilfit: error: no spec: give a spec file (or - for standard input), or the spec fields as flags (see --help)")

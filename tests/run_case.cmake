@@ -1,6 +1,7 @@
 # Runs one command and checks its exit code and output; used by the end-to-end ctest cases.
 #   cmake -DCMD="prog;arg;..." (or prog|arg|...) -DRC=1 [-DSTDOUT_MATCH=regex] [-DSTDERR_MATCH=regex]
 #         [-DSTDERR_EXACT=line] [-DSTDOUT_NOT_MATCH=regex] [-DINPUT=file] [-DWORKDIR=dir]
+#         [-DSTDOUT_FIRST=line] [-DLINE_MAX=columns]
 #         -P run_case.cmake
 string(REPLACE "|" ";" CMD "${CMD}")
 if(NOT DEFINED RC)
@@ -31,4 +32,19 @@ if(DEFINED STDERR_EXACT)
   if(NOT first_line STREQUAL STDERR_EXACT)
     message(FATAL_ERROR "first line of stderr is\n  ${first_line}\nexpected\n  ${STDERR_EXACT}")
   endif()
+endif()
+if(DEFINED STDOUT_FIRST)
+  string(REGEX REPLACE "\n.*" "" first_out "${out}")
+  if(NOT first_out STREQUAL STDOUT_FIRST)
+    message(FATAL_ERROR "first line of stdout is\n  ${first_out}\nexpected\n  ${STDOUT_FIRST}")
+  endif()
+endif()
+if(DEFINED LINE_MAX)
+  string(REPLACE "\n" ";" lines "${out}")
+  foreach(line IN LISTS lines)
+    string(LENGTH "${line}" n)
+    if(n GREATER LINE_MAX)
+      message(FATAL_ERROR "a line of stdout is ${n} columns wide, more than ${LINE_MAX}:\n${line}")
+    endif()
+  endforeach()
 endif()

@@ -32,15 +32,6 @@ bool diode_kind_matches(const Diode& d, const std::string& kind) {
 
 }  // namespace
 
-CLI::App* setup_parts(CLI::App& app, PartsOptions& options) {
-    CLI::App* cmd = app.add_subcommand("parts", "list the parts table, or show one part");
-    cmd->add_option("kind", options.kind,
-                    "npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil or pin; or a part id");
-    cmd->add_option("id", options.id, "a part id to show in full");
-    add_common_options(*cmd, options.common, false);
-    return cmd;
-}
-
 int run_parts(const PartsOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Catalogue& cat = table.catalogue;

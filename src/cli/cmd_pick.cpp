@@ -7,14 +7,6 @@
 
 namespace coilfit::cli {
 
-CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
-    CLI::App* cmd = app.add_subcommand("pick", "try every transistor (and diode) of the parts table against a spec; list the passing ones first");
-    add_spec_options(*cmd, options.spec);
-    add_common_options(*cmd, options.common, true);
-    cmd->add_option("--top", options.top, "list only the best N combinations (default: all)");
-    return cmd;
-}
-
 int run_pick(const PickOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);

@@ -7,15 +7,6 @@
 
 namespace coilfit::cli {
 
-CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
-    CLI::App* cmd = app.add_subcommand("size", "size and check one driver channel at worst case");
-    add_spec_options(*cmd, options.spec);
-    add_common_options(*cmd, options.common, true);
-    cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
-    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE");
-    return cmd;
-}
-
 int run_size(const SizeOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);

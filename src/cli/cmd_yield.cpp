@@ -244,53 +244,7 @@ private:
     std::chrono::steady_clock::time_point last_{};
 };
 
-// Accepts only plain decimal digits within [min, max]: CLI11 alone would wrap "-1" round into a
-// huge unsigned value and clamp an overflow silently.
-CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
-    return CLI::Validator(
-        [min, max](std::string& s) -> std::string {
-            const bool digits = !s.empty() && s.size() <= 20 &&
-                                std::all_of(s.begin(), s.end(), [](char ch) { return ch >= '0' && ch <= '9'; });
-            std::uint64_t v = 0;
-            bool overflow = false;
-            for (char ch : s) {
-                const auto d = static_cast<std::uint64_t>(ch - '0');
-                if (!digits) break;
-                if (v > (UINT64_MAX - d) / 10) overflow = true;
-                v = v * 10 + d;
-            }
-            if (!digits || overflow || v < min || v > max) {
-                return fmt::format("expected a whole number from {} to {}, got \"{}\"", min, max, s);
-            }
-            return std::string();
-        },
-        "");
-}
-
 }  // namespace
-
-CLI::App* setup_yield(CLI::App& app, YieldOptions& options) {
-    CLI::App* cmd = app.add_subcommand(
-        "yield",
-        "statistical pass rate of the sized design over the tolerances (Monte Carlo); exit 0 when every sample "
-        "passed, 1 when any failed, 2 on bad input");
-    add_spec_options(*cmd, options.spec);
-    add_common_options(*cmd, options.common, true);
-    cmd->add_option("--samples", options.samples, "number of samples (default 100000)")
-        ->check(whole_number(1, 1'000'000'000'000));
-    cmd->add_option("--seed", options.seed, "seed of the random numbers, 0 to 2^64-1; the same seed gives the same result (default 1)")
-        ->check(whole_number(0, UINT64_MAX));
-    cmd->add_option("--distribution", options.distribution,
-                    "uniform within each tolerance, or normal with the tolerance at 3 sigma, truncated (default uniform)")
-        ->check(CLI::IsMember({"uniform", "normal"}));
-    cmd->add_option("--conditions", options.conditions,
-                    "worst: hold supply, ambient and pin VDD at each check's worst corner and draw only part spreads "
-                    "(default); sampled: draw them too")
-        ->check(CLI::IsMember({"worst", "sampled"}));
-    cmd->add_option("--jobs,-j", options.jobs, "threads to use (default 0: all cores); the result does not depend on it")
-        ->check(whole_number(0, 4096));
-    return cmd;
-}
 
 int run_yield(const YieldOptions& options) {
     const io::PartsTable table = load_table(options.common);

@@ -1,7 +1,9 @@
-// Each subcommand: an options struct, setup_X(CLI::App&, XOptions&) and run_X(const XOptions&).
+// Each subcommand: an options struct and run_X(const XOptions&). The flags that fill the structs
+// live in args.cpp, the one file that sees the argument library.
 #pragma once
 
-#include <CLI/CLI.hpp>
+#include <cstdint>
+#include <string>
 
 #include "cli/common.hpp"
 
@@ -13,7 +15,6 @@ struct SizeOptions {
     bool strict = false;
     std::string netlist;  // --netlist FILE
 };
-CLI::App* setup_size(CLI::App& app, SizeOptions& options);
 int run_size(const SizeOptions& options);
 
 struct PartsOptions {
@@ -21,7 +22,6 @@ struct PartsOptions {
     std::string kind;  // npn, darlington, diode kinds, zener, coil, pin; or an id
     std::string id;
 };
-CLI::App* setup_parts(CLI::App& app, PartsOptions& options);
 int run_parts(const PartsOptions& options);
 
 struct PickOptions {
@@ -29,7 +29,6 @@ struct PickOptions {
     CommonOptions common;
     std::size_t top = 0;  // 0: all
 };
-CLI::App* setup_pick(CLI::App& app, PickOptions& options);
 int run_pick(const PickOptions& options);
 
 struct YieldOptions {
@@ -41,7 +40,6 @@ struct YieldOptions {
     std::string conditions = "worst";  // worst | sampled
     unsigned jobs = 0;  // 0: all cores
 };
-CLI::App* setup_yield(CLI::App& app, YieldOptions& options);
 int run_yield(const YieldOptions& options);
 
 }  // namespace coilfit::cli

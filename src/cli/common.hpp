@@ -5,8 +5,6 @@
 #include <utility>
 #include <vector>
 
-#include <CLI/CLI.hpp>
-
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
 
@@ -22,7 +20,7 @@ struct SpecOptions {
     std::string spec_path;                            // empty: the spec is given by flags only
     std::vector<std::pair<std::string, std::string>> values;  // (spec field path, value) in flag order
     std::vector<std::pair<std::string, std::string>> flag_of;  // (spec field path, flag name)
-    std::vector<std::string> storage;                 // one slot per flag, bound to CLI11
+    std::vector<std::string> storage;                          // one slot per flag, bound by args.cpp
 };
 
 struct CommonOptions {
@@ -30,10 +28,6 @@ struct CommonOptions {
     std::string format = "text";
     std::string output;      // --output FILE: written atomically
 };
-
-// Adds SPEC and every spec-field flag (--supply, --coil-resistance, ...) to a subcommand.
-void add_spec_options(CLI::App& app, SpecOptions& options);
-void add_common_options(CLI::App& app, CommonOptions& options, bool with_output);
 
 // The spec document: the file (or "-" for stdin, or nothing) with the flags applied.
 [[nodiscard]] io::SpecDocument build_spec_document(const SpecOptions& options);
@@ -44,7 +38,8 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
 void emit(const std::string& text, const std::string& output_path);
 // Colour only on a terminal, never with NO_COLOR or when writing a file.
 [[nodiscard]] bool use_color(const std::string& output_path);
-// Terminal width for wrapping (COLUMNS, else 100).
+// Terminal width for wrapping: COLUMNS, else the terminal's (standard output's) width, else 100;
+// never under 60.
 [[nodiscard]] std::size_t text_width();
 
 }  // namespace coilfit::cli

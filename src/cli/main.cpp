@@ -1,38 +1,25 @@
 // coilfit: worst-case sizing of a transistor coil driver on a microcontroller pin.
-// main only wires the subcommands; each lives in its own file.
+// main reads the command line (args.cpp) and runs the command; each lives in its own file.
 #include <exception>
 #include <iostream>
 
-#include "cli/commands.hpp"
+#include "cli/args.hpp"
 
 int main(int argc, char** argv) {
     using namespace coilfit::cli;
-    CLI::App app{"coilfit: sizes and checks a transistor driver for a relay, contactor, solenoid or valve coil on a "
-                 "microcontroller pin, at worst case.\nExit codes: 0 every check passed, 1 a check failed, 2 bad usage or input."};
-    app.set_version_flag("--version", std::string("coilfit ") + COILFIT_VERSION);
-    app.require_subcommand(1);
-
-    SizeOptions size_options;
-    PartsOptions parts_options;
-    PickOptions pick_options;
-    YieldOptions yield_options;
-    CLI::App* size_cmd = setup_size(app, size_options);
-    CLI::App* parts_cmd = setup_parts(app, parts_options);
-    CLI::App* pick_cmd = setup_pick(app, pick_options);
-    CLI::App* yield_cmd = setup_yield(app, yield_options);
-
+    Invocation invocation;
     try {
-        app.parse(argc, argv);
-    } catch (const CLI::ParseError& e) {
-        const int code = app.exit(e);  // prints help, version or the usage error
-        return code == 0 ? exit_pass : exit_bad_input;
-    }
-
-    try {
-        if (size_cmd->parsed()) return run_size(size_options);
-        if (parts_cmd->parsed()) return run_parts(parts_options);
-        if (pick_cmd->parsed()) return run_pick(pick_options);
-        if (yield_cmd->parsed()) return run_yield(yield_options);
+        if (const auto done = parse_command_line(argc, argv, invocation)) return *done;
+        switch (invocation.command) {
+            case Command::size:
+                return run_size(invocation.size);
+            case Command::parts:
+                return run_parts(invocation.parts);
+            case Command::pick:
+                return run_pick(invocation.pick);
+            case Command::yield:
+                return run_yield(invocation.yield);
+        }
     } catch (const coilfit::InputError& e) {
         std::cerr << "coilfit: error: " << e.what() << "\n";
         return exit_bad_input;

@@ -130,7 +130,8 @@ std::string resolve_parts_path(const std::string& flag) {
     std::error_code ec;
     const fs::path exe = fs::read_symlink("/proc/self/exe", ec);
     if (!ec) {
-        const fs::path installed = exe.parent_path().parent_path() / "share" / "coilfit" / "parts";
+        // COILFIT_RELATIVE_PARTS_DIR: the data folder seen from the installed bin/ ("../share/coilfit/parts").
+        const fs::path installed = (exe.parent_path() / COILFIT_RELATIVE_PARTS_DIR).lexically_normal();
         if (fs::is_directory(installed, ec)) return installed.string();
     }
     if (fs::is_directory(COILFIT_SOURCE_PARTS_DIR, ec)) return COILFIT_SOURCE_PARTS_DIR;

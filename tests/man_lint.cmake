@@ -1,0 +1,20 @@
+# The man page renders without a warning: mandoc's lint (warning level and above) and groff
+# with every warning on (-ww), formatting to nowhere (-z).
+#   cmake -DPAGE=coilfit.1 -P man_lint.cmake
+find_program(MANDOC mandoc)
+find_program(GROFF groff)
+if(NOT MANDOC AND NOT GROFF)
+  message(FATAL_ERROR "neither mandoc nor groff is installed (.ci/run installs both)")
+endif()
+if(MANDOC)
+  execute_process(COMMAND ${MANDOC} -T lint -W warning ${PAGE} RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
+  if(NOT rc EQUAL 0 OR out OR err)
+    message(FATAL_ERROR "mandoc -T lint (exit ${rc}):\n${out}${err}")
+  endif()
+endif()
+if(GROFF)
+  execute_process(COMMAND ${GROFF} -ww -z -man ${PAGE} RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
+  if(NOT rc EQUAL 0 OR out OR err)
+    message(FATAL_ERROR "groff -ww -z -man (exit ${rc}):\n${out}${err}")
+  endif()
+endif()
