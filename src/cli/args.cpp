@@ -42,7 +42,7 @@ CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
 }
 
 // One of a few words, in our wording ("expected text or json, got \"xml\"").
-CLI::Validator one_of(std::vector<std::string> words) {
+CLI::Validator one_of(const std::vector<std::string>& words) {
     return CLI::Validator(
         [words](std::string& s) -> std::string {
             if (std::find(words.begin(), words.end(), s) != words.end()) return std::string();
@@ -283,7 +283,7 @@ std::string usage_message(const CLI::ParseError& e, const CLI::App* sub, const s
         }
         return "unexpected argument \"" + word + "\"";
     }
-    const std::string what = e.what();
+    std::string what = e.what();
     if (dynamic_cast<const CLI::ArgumentMismatch*>(&e) != nullptr) {
         const std::size_t colon = what.find(": ");
         return (colon == std::string::npos ? what : what.substr(0, colon)) + ": expected a value";

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <atomic>
 #include <cmath>
+#include <limits>
 #include <thread>
 
 namespace coilfit {
@@ -44,8 +45,8 @@ inline double acklam_quantile(double p) {
     constexpr double d[] = {7.784695709041462e-03, 3.224671290700398e-01, 2.445134137142996e+00,
                             3.754408661907416e+00};
     constexpr double p_low = 0.02425;
-    if (!(p > 0)) return -INFINITY;
-    if (!(p < 1)) return INFINITY;
+    if (!(p > 0)) return -std::numeric_limits<double>::infinity();
+    if (!(p < 1)) return std::numeric_limits<double>::infinity();
     auto tail = [&](double q) {
         return (((((c[0] * q + c[1]) * q + c[2]) * q + c[3]) * q + c[4]) * q + c[5]) /
                ((((d[0] * q + d[1]) * q + d[2]) * q + d[3]) * q + 1.0);
