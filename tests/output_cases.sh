@@ -5,6 +5,7 @@
 #   sh output_cases.sh CASE COILFIT SCRATCH EXAMPLES PARTS
 # Expected messages are this project's own contract (architecture doc, "Errors").
 set -u
+here=$(cd "$(dirname "$0")" && pwd)
 case_name=$1
 exe=$2
 scratch=$3/$case_name
@@ -212,6 +213,22 @@ hostile-file-names)
     nl=$(printf 'two\nlines.json')
     run 2 size spec.json -o "$nl/x"
     [ "$(wc -l <err.txt)" = 1 ] || fail "a newline in a file name split the message"
+    ;;
+inline-labels)
+    # An inline record reusing a table id (2N4401 with a gain of 5000) is never plain "2N4401".
+    inl=$here/data/inline_2n4401.json
+    run 0 size "$inl"
+    grep -q 'transistor  *inline 2N4401 (npn' out.txt || fail "text report: $(grep transistor out.txt | head -1)"
+    run 0 size "$inl" --format json
+    grep -q '"label": "inline 2N4401"' out.txt || fail "JSON report lacks the label"
+    run 0 size "$inl" --netlist n.cir
+    grep -q '^\*   transistor inline 2N4401; clamp diode inline 1N4148' n.cir || fail "netlist comment"
+    run 0 yield "$inl" --samples 100 --format json
+    grep -q '"transistor": "inline 2N4401"' out.txt || fail "yield JSON"
+    run 0 yield "$inl" --samples 100
+    grep -q 'design  *inline 2N4401, .*clamp diode inline 1N4148' out.txt || fail "yield text"
+    run 0 pick "$inl" --parts "$parts/bipolar.json" --top 1
+    grep -q ' inline 1N4148 ' out.txt || fail "pick text"
     ;;
 *)
     fail "unknown case"

@@ -37,37 +37,61 @@ char temp_path[PATH_MAX + 1];
 volatile std::sig_atomic_t temp_set = 0;
 std::function<void()> before_rename;
 
+// The handlers in place before ours, restored when the temporary is gone (and by the signal,
+// so that it then does what it did before: end the program, or whatever a caller set up).
+constexpr int caught[] = {SIGINT, SIGTERM, SIGHUP};
+struct sigaction previous[3];
+
+int caught_index(int sig) {
+    for (int i = 0; i < 3; ++i) {
+        if (caught[i] == sig) return i;
+    }
+    return 0;
+}
+
 extern "C" void remove_temp_and_die(int sig) {
     if (temp_set) ::unlink(temp_path);
-    std::signal(sig, SIG_DFL);
+    temp_set = 0;
+    ::sigaction(sig, &previous[caught_index(sig)], nullptr);
     std::raise(sig);
 }
 
-void install_handlers() {
-    static bool installed = false;
-    if (installed) return;
-    installed = true;
-    for (const int sig : {SIGINT, SIGTERM, SIGHUP}) {
-        struct sigaction old{};
-        if (::sigaction(sig, nullptr, &old) == 0 && old.sa_handler == SIG_IGN) continue;  // nohup: stay ignored
-        struct sigaction sa{};
-        sa.sa_handler = remove_temp_and_die;
-        sigemptyset(&sa.sa_mask);
-        ::sigaction(sig, &sa, nullptr);
-    }
-}
-
 void register_temp(const std::string& path) {
-    install_handlers();
     temp_set = 0;
     std::atomic_signal_fence(std::memory_order_seq_cst);
     std::memcpy(temp_path, path.c_str(), std::min(path.size() + 1, sizeof(temp_path)));
     temp_path[PATH_MAX] = '\0';
     std::atomic_signal_fence(std::memory_order_seq_cst);
     temp_set = 1;
+    for (int i = 0; i < 3; ++i) {
+        struct sigaction sa{};
+        sa.sa_handler = remove_temp_and_die;
+        sigemptyset(&sa.sa_mask);
+        ::sigaction(caught[i], &sa, &previous[i]);
+        if (previous[i].sa_handler == SIG_IGN) ::sigaction(caught[i], &previous[i], nullptr);  // nohup: stays ignored
+    }
 }
 
+// Holds SIGINT, SIGTERM and SIGHUP back for its lifetime: between creating the temporary and
+// registering it, and between renaming it and forgetting it, a signal must wait.
+class SignalsHeld {
+public:
+    SignalsHeld() {
+        sigset_t set;
+        sigemptyset(&set);
+        for (const int sig : caught) sigaddset(&set, sig);
+        ::sigprocmask(SIG_BLOCK, &set, &old_);
+    }
+    ~SignalsHeld() { ::sigprocmask(SIG_SETMASK, &old_, nullptr); }
+    SignalsHeld(const SignalsHeld&) = delete;
+    SignalsHeld& operator=(const SignalsHeld&) = delete;
+
+private:
+    sigset_t old_{};
+};
+
 void clear_temp() {
+    for (int i = 0; i < 3; ++i) ::sigaction(caught[i], &previous[i], nullptr);
     temp_set = 0;
     std::atomic_signal_fence(std::memory_order_seq_cst);
 }
@@ -188,12 +212,16 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
                         const struct stat* old) {
     const fs::path t(target);
     std::string tmpl = temp_template(t);
-    const int fd = ::mkstemp(tmpl.data());  // O_CREAT | O_EXCL, mode 0600: no planted link is followed
-    if (fd < 0) {
-        const fs::path dir = t.parent_path().empty() ? fs::path(".") : t.parent_path();
-        throw InputError(shown(shown_as) + ": cannot write here (" + shown(dir.string()) + ": " + reason(errno) + ")");
+    int fd = -1;
+    {
+        const SignalsHeld held;
+        fd = ::mkstemp(tmpl.data());  // O_CREAT | O_EXCL, mode 0600: no planted link is followed
+        if (fd < 0) {
+            const fs::path dir = t.parent_path().empty() ? fs::path(".") : t.parent_path();
+            throw InputError(shown(shown_as) + ": cannot write here (" + shown(dir.string()) + ": " + reason(errno) + ")");
+        }
+        register_temp(tmpl);
     }
-    register_temp(tmpl);
     const auto fail = [&](const std::string& what, int err) {
         ::close(fd);
         ::unlink(tmpl.c_str());
@@ -222,13 +250,16 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
         throw InputError(shown(shown_as) + ": writing failed: " + reason(errno) + "; the file was not changed");
     }
     if (before_rename) before_rename();
-    if (::rename(tmpl.c_str(), target.c_str()) != 0) {
-        const int err = errno;
-        ::unlink(tmpl.c_str());
+    {
+        const SignalsHeld held;
+        if (::rename(tmpl.c_str(), target.c_str()) != 0) {
+            const int err = errno;
+            ::unlink(tmpl.c_str());
+            clear_temp();
+            throw InputError(shown(shown_as) + ": cannot replace the file: " + reason(err) + "; the file was not changed");
+        }
         clear_temp();
-        throw InputError(shown(shown_as) + ": cannot replace the file: " + reason(err) + "; the file was not changed");
     }
-    clear_temp();
     sync_folder(t.parent_path());
 }
 
