@@ -32,6 +32,10 @@ run() {
 }
 first_err() { head -n 1 err.txt; }
 expect_err() { [ "$(first_err)" = "$1" ] || fail "stderr is '$(first_err)', expected '$1'"; }
+# A usage error from the argument library: the same words, with or without the program's prefix.
+expect_usage_err() {
+    [ "$(first_err)" = "$1" ] || [ "$(first_err)" = "coilfit: error: $1" ] || fail "stderr is '$(first_err)', expected '$1'"
+}
 sum() { cksum <"$1"; }
 mode() { stat -c %a "$1"; }
 no_temp() { ! ls -A "${1:-.}" | grep -q 'coilfit-' || fail "a temporary file was left: $(ls -A "${1:-.}")"; }
@@ -157,7 +161,7 @@ repeated-flags-last-wins)
     ;;
 top-whole-number)
     run 2 pick spec.json --top -1
-    expect_err '--top: expected a whole number from 0 to 1000000000, got "-1"'
+    expect_usage_err '--top: expected a whole number from 0 to 1000000000, got "-1"'
     run 2 pick spec.json --top 1.5
     run 0 pick spec.json --top 0
     grep -q 'more (--top 0 lists all)' out.txt && fail "--top 0 did not list all"
@@ -166,11 +170,11 @@ top-whole-number)
     ;;
 empty-names)
     run 2 size spec.json --parts ""
-    expect_err "--parts: expected a file name, got an empty text"
+    expect_usage_err "--parts: expected a file name, got an empty text"
     run 2 size spec.json -o ""
-    expect_err "--output: expected a file name, got an empty text"
+    expect_usage_err "--output: expected a file name, got an empty text"
     run 2 size spec.json --netlist ""
-    expect_err "--netlist: expected a file name, got an empty text"
+    expect_usage_err "--netlist: expected a file name, got an empty text"
     ;;
 parts-folder-entries)
     mkdir table
@@ -187,6 +191,10 @@ parts-folder-entries)
     run 2 parts --parts table
     expect_err "coilfit: error: table/extra.json: a folder named *.json in the parts folder; parts files are files"
     rmdir table/extra.json
+    mkfifo table/pipe.json
+    run 2 parts --parts table
+    expect_err "coilfit: error: table/pipe.json: not a regular file, in the parts folder"
+    rm table/pipe.json
     ln -s table table-link
     run 0 parts --parts table-link
     ln -s l2 l1
