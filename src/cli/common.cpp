@@ -158,7 +158,7 @@ CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
                 v = v * 10 + d;
             }
             if (!digits || overflow || v < min || v > max) {
-                return fmt::format("expected a whole number from {} to {}, got \"{}\"", min, max, s);
+                return fmt::format("expected a whole number from {} to {}, got \"{}\"", min, max, io::printable(s));
             }
             return std::string();
         },
