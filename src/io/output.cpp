@@ -236,7 +236,8 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
     mode_t mode = 0;
     if (old) {
         mode = old->st_mode & 07777;
-        (void)::fchown(fd, old->st_uid, old->st_gid);  // keeps the owner where we may (root); else ours
+        // Keeps the owner where we may (root), else at least the group where we belong to it.
+        if (::fchown(fd, old->st_uid, old->st_gid) != 0) (void)::fchown(fd, static_cast<uid_t>(-1), old->st_gid);
     } else {
         const mode_t mask = ::umask(0);
         ::umask(mask);
