@@ -49,7 +49,7 @@ int run_parts(const PartsOptions& options) {
     std::string kind = options.kind;
     std::string id = options.id;
     if (!kind.empty() && std::find(kinds.begin(), kinds.end(), kind) == kinds.end()) {
-        if (!id.empty()) throw InputError("parts: unknown kind \"" + kind + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin");
+        if (!id.empty()) throw InputError("parts: unknown kind \"" + io::printable(kind) + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin");
         id = kind;  // `coilfit parts 2N4401`
         kind.clear();
     }
@@ -138,7 +138,7 @@ int run_parts(const PartsOptions& options) {
         pre.push_back(pj);
         pre_rows.push_back({p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")});
     }
-    if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + id + "\" in the table");
+    if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + io::printable(id) + "\" in the table");
 
     if (options.common.format == "json") {
         out["transistors"] = bip;
@@ -169,7 +169,7 @@ int run_parts(const PartsOptions& options) {
     if (pre_rows.size() > 1) text += fmt::format("Presets ({})\n", pre_rows.size() - 1) + table_text(pre_rows) + "\n";
     text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n";
     text += "Read from: ";
-    for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + table.files[i];
+    for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + io::printable(table.files[i], 4096);
     text += "\n";
     emit(text, "");
     return exit_pass;

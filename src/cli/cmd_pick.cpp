@@ -11,13 +11,16 @@ CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
     CLI::App* cmd = app.add_subcommand("pick", "try every transistor (and diode) of the parts table against a spec; list the passing ones first");
     add_spec_options(*cmd, options.spec);
     add_common_options(*cmd, options.common, true);
-    cmd->add_option("--top", options.top, "list only the best N combinations (default: all)");
+    cmd->add_option("--top", options.top, "list only the best N combinations, a whole number; 0 (the default) lists all")
+        ->check(whole_number(0, 1'000'000'000));
     return cmd;
 }
 
 int run_pick(const PickOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, {}, inputs);  // before the table is tried
     const PickResult result = pick(spec, table.catalogue);
     const std::size_t n = options.top == 0 ? result.candidates.size() : std::min(options.top, result.candidates.size());
     const bool any_pass = !result.candidates.empty() && result.candidates.front().verdict == Verdict::pass;
@@ -84,7 +87,7 @@ int run_pick(const PickOptions& options) {
         text += "\nRanked by the smallest margin over all checks; size one with `coilfit size SPEC --transistor ID --diode ID`.\n"
                 "Values are typical datasheet limits from memory; confirm against the datasheets in use.\n";
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     return any_pass ? exit_pass : exit_fail;
 }
 

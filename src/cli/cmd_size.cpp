@@ -12,7 +12,8 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
     add_spec_options(*cmd, options.spec);
     add_common_options(*cmd, options.common, true);
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
-    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE");
+    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
+        ->check(file_name());
     return cmd;
 }
 
@@ -20,9 +21,12 @@ int run_size(const SizeOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
     const SizingReport report = size(spec, table.catalogue);
+    // Both outputs are checked against the inputs and each other before either is written.
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, options.netlist, inputs);
     if (!options.netlist.empty()) {
         // Built before anything is written, so a design that cannot be simulated writes nothing.
-        emit(io::spice_netlist(report), options.netlist);
+        emit(io::spice_netlist(report), options.netlist, inputs, "--netlist");
     }
     std::string text;
     if (options.common.format == "json") {
@@ -33,7 +37,7 @@ int run_size(const SizeOptions& options) {
         style.width = text_width();
         text = io::render_text(report, style);
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     if (report.verdict == Verdict::fail) return exit_fail;
     if (options.strict && report.has_warnings) return exit_fail;
     return exit_pass;

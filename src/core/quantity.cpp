@@ -1,5 +1,7 @@
 #include "coilfit/quantity.hpp"
 
+#include "coilfit/text.hpp"
+
 #include <array>
 #include <algorithm>
 #include <charconv>
@@ -87,54 +89,9 @@ std::string_view trim(std::string_view s) {
 
 bool is_digit(char c) { return c >= '0' && c <= '9'; }
 
-// Length of the well-formed UTF-8 sequence at s[i], 0 when the bytes there are not one.
-std::size_t utf8_length(std::string_view s, std::size_t i) {
-    const auto b = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
-    const unsigned char c = b(i);
-    if (c < 0x80) return 1;
-    const std::size_t n = c >= 0xC2 && c <= 0xDF ? 2 : c >= 0xE0 && c <= 0xEF ? 3 : c >= 0xF0 && c <= 0xF4 ? 4 : 0;
-    if (n == 0 || i + n > s.size()) return 0;
-    const unsigned char lo = c == 0xE0 ? 0xA0 : c == 0xF0 ? 0x90 : 0x80;
-    const unsigned char hi = c == 0xED ? 0x9F : c == 0xF4 ? 0x8F : 0xBF;
-    if (b(i + 1) < lo || b(i + 1) > hi) return 0;
-    for (std::size_t k = 2; k < n; ++k) {
-        if (b(i + k) < 0x80 || b(i + k) > 0xBF) return 0;
-    }
-    return n;
-}
-
-// Shows the offending text in a message: printable ASCII and UTF-8 as they are, control
-// characters and bytes that are not UTF-8 escaped, long texts cut (never inside a character),
-// so that binary garbage never reaches a terminal raw.
-std::string quoted(std::string_view text) {
-    std::string out = "\"";
-    std::size_t shown = 0;
-    for (std::size_t i = 0; i < text.size();) {
-        if (++shown > 40) {
-            out += "...";
-            break;
-        }
-        const char c = text[i];
-        const auto u = static_cast<unsigned char>(c);
-        const std::size_t n = utf8_length(text, i);
-        if (c == '"' || c == '\\') {
-            out += '\\';
-            out += c;
-        } else if (n == 0 || u < 0x20 || u == 0x7f || (u == 0xC2 && static_cast<unsigned char>(text[i + 1]) < 0xA0)) {
-            constexpr std::string_view hex = "0123456789abcdef";
-            out += "\\x";
-            out += hex[u >> 4U];
-            out += hex[u & 0xfU];
-            i += 1;
-            continue;
-        } else {
-            out.append(text.substr(i, n));
-        }
-        i += n;
-    }
-    out += '"';
-    return out;
-}
+// Shows the offending text in a message, escaped as every message escapes input
+// (coilfit/text.hpp): binary garbage, controls and invisible characters never reach a terminal raw.
+std::string quoted(std::string_view text) { return "\"" + escape_text(text, 40, true) + "\""; }
 
 [[noreturn]] void fail(Unit expected, std::string_view text, std::string_view why = {}) {
     std::string msg = "expected ";
@@ -316,10 +273,10 @@ Suffix read_suffix(std::string_view rest, std::string_view text, Unit expected) 
 double parse_quantity(std::string_view text, Unit expected) {
     const std::string_view s = trim(text);
     if (s.empty()) fail(expected, text);
-    if (s.size() > 64) {
+    if (count_characters(s) > 64) {
         throw InputError("expected " + std::string(info(expected).noun) + " such as \"" +
                          std::string(info(expected).example) + "\", got a text of " +
-                         std::to_string(s.size()) + " characters");
+                         std::to_string(count_characters(s)) + " characters");
     }
 
     if (expected == Unit::ohm) {
