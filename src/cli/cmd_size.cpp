@@ -3,6 +3,7 @@
 #include "cli/commands.hpp"
 #include "coilfit/sizing.hpp"
 #include "io/netlist.hpp"
+#include "io/plot_svg.hpp"
 #include "io/report_io.hpp"
 
 namespace coilfit::cli {
@@ -13,6 +14,9 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
     add_common_options(*cmd, options.common, true);
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
     cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE");
+    cmd->add_option("--plot", options.plot,
+                    "also draw the turn-off transient of every clamp option (coil current and collector voltage against "
+                    "time) into FILE.svg; needs coil.inductance");
     return cmd;
 }
 
@@ -20,10 +24,11 @@ int run_size(const SizeOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
     const SizingReport report = size(spec, table.catalogue);
-    if (!options.netlist.empty()) {
-        // Built before anything is written, so a design that cannot be simulated writes nothing.
-        emit(io::spice_netlist(report), options.netlist);
-    }
+    // Built before anything is written, so a design that cannot be simulated or drawn writes nothing.
+    const std::string netlist = options.netlist.empty() ? std::string() : io::spice_netlist(report);
+    const std::string plot = options.plot.empty() ? std::string() : io::turn_off_svg(report);
+    if (!options.netlist.empty()) emit(netlist, options.netlist);
+    if (!options.plot.empty()) emit(plot, options.plot);
     std::string text;
     if (options.common.format == "json") {
         text = io::report_to_json(report).dump(2) + "\n";
