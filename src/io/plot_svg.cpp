@@ -102,9 +102,11 @@ struct Panel {
 
 // Grid, frame, tick labels and the axis title of one panel; time labels only under the lower one.
 void draw_panel(std::string& o, const Panel& p, const std::string& title, bool time_labels) {
-    o += fmt::format(R"(<rect class="panel" id="{}" x="{}" y="{}" width="{}" height="{}" fill="#fbfcfd" stroke="none"/>)"
+    // The axes' ranges ride along as data attributes, so that a test can read values back off the drawing.
+    o += fmt::format(R"(<rect class="panel" id="{}" x="{}" y="{}" width="{}" height="{}" fill="#fbfcfd" stroke="none" )"
+                     R"(data-t-from="{:.9g}" data-t-to="{:.9g}" data-lo="{:.9g}" data-hi="{:.9g}"/>)"
                      "\n",
-                     p.id, plot_x, p.y, plot_w, panel_h);
+                     p.id, plot_x, p.y, plot_w, panel_h, p.x.lo, p.x.hi, p.v.lo, p.v.hi);
     for (const double t : ticks(p.x)) {
         const double x = p.px(t);
         o += fmt::format(R"(<line x1="{:.2f}" y1="{}" x2="{:.2f}" y2="{}" stroke="{}" stroke-width="1"/>)"
@@ -214,8 +216,9 @@ std::string turn_off_svg(const SizingReport& r) {
         i_max = std::max({i_max, o.turn_off->i0_a, o.turn_off->i0_peak_a});
         drawn.push_back({&o, {}, palette[drawn.size() % std::size(palette)]});
     }
+    if (!r.spec.coil.inductance_h) throw InputError("--plot: the turn-off transient needs the coil inductance; give coil.inductance");
     if (drawn.empty() || !(duration > 0)) {
-        throw InputError("--plot: nothing to draw; the turn-off transient needs coil.inductance and a clamp with a diode");
+        throw InputError("--plot: nothing to draw; the turn-off transient needs a clamp with a diode (clamp.type is \"none\")");
     }
     const double t_to = duration * 1.08, t_from = -duration * 0.08;
     const double limit_v = r.sized.worst.driver.peak_limit_v;
