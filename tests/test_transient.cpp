@@ -35,7 +35,8 @@ TurnOff hand_worked() {
 }
 
 double value_at(const std::vector<SamplePoint>& pts, double t_s) {
-    const auto it = std::find_if(pts.begin(), pts.end(), [t_s](const SamplePoint& p) { return std::abs(p.t_s - t_s) < 1e-12; });
+    const auto it =
+        std::find_if(pts.begin(), pts.end(), [t_s](const SamplePoint& p) { return std::abs(p.t_s - t_s) < 1e-12; });
     REQUIRE(it != pts.end());
     return it->value;
 }
@@ -85,7 +86,8 @@ TEST_SUITE("transient") {
         TurnOff t = hand_worked();
         const TurnOffSeries s = sample_turn_off(t, -0.001, 0.008, 50);
         // At t = 0 two points: the on-state drop, then Vs_hi + Vc = 22 V.
-        const auto at0 = std::find_if(s.voltage.begin(), s.voltage.end(), [](const SamplePoint& p) { return p.t_s == 0.0; });
+        const auto at0 =
+            std::find_if(s.voltage.begin(), s.voltage.end(), [](const SamplePoint& p) { return p.t_s == 0.0; });
         REQUIRE(at0 + 1 != s.voltage.end());
         CHECK(at0->value == 0.2);
         CHECK((at0 + 1)->value == Approx(22.0));
@@ -121,7 +123,8 @@ TEST_SUITE("transient") {
         Spec spec = test::load_example("greenhouse-valve.json");
         spec.coil.inductance_h.reset();
         const SizingReport r = size(spec, test::shipped_table().catalogue);
-        CHECK_THROWS_WITH_AS((void)io::turn_off_svg(r), "--plot: the turn-off transient needs the coil inductance; give coil.inductance",
+        CHECK_THROWS_WITH_AS((void)io::turn_off_svg(r),
+                             "--plot: the turn-off transient needs the coil inductance; give coil.inductance",
                              InputError);
     }
 

@@ -29,7 +29,7 @@ struct TurnOff {
     // Peak corner: highest supply, the clamp's constant part at its highest (diode drop, plus the
     // zener or TVS), the series resistor at its high tolerance (its drop follows the current).
     double vs_hi_v = 0;
-    double i0_peak_a = 0;          // the coil current and cold resistance at that corner
+    double i0_peak_a = 0;  // the coil current and cold resistance at that corner
     double r_coil_peak_ohm = 0;
     double vc_peak_v = 0;
     double r_series_peak_ohm = 0;

@@ -30,11 +30,20 @@ std::string esc(std::string_view s) {
     std::string out;
     for (const char ch : s) {
         switch (ch) {
-        case '&': out += "&amp;"; break;
-        case '<': out += "&lt;"; break;
-        case '>': out += "&gt;"; break;
-        case '"': out += "&quot;"; break;
-        default: out += ch;
+            case '&':
+                out += "&amp;";
+                break;
+            case '<':
+                out += "&lt;";
+                break;
+            case '>':
+                out += "&gt;";
+                break;
+            case '"':
+                out += "&quot;";
+                break;
+            default:
+                out += ch;
         }
     }
     return out;
@@ -65,13 +74,20 @@ Axis make_axis(double lo, double hi, bool round_hi) {
 
 std::string_view prefix(int exp3) {
     switch (exp3) {
-    case -12: return "p";
-    case -9: return "n";
-    case -6: return "µ";
-    case -3: return "m";
-    case 3: return "k";
-    case 6: return "M";
-    default: return "";
+        case -12:
+            return "p";
+        case -9:
+            return "n";
+        case -6:
+            return "µ";
+        case -3:
+            return "m";
+        case 3:
+            return "k";
+        case 6:
+            return "M";
+        default:
+            return "";
     }
 }
 
@@ -87,7 +103,8 @@ std::string tick_label(const Axis& a, double v) {
 
 std::vector<double> ticks(const Axis& a) {
     std::vector<double> t;
-    for (double k = std::ceil(a.lo / a.step - 1e-9); k * a.step <= a.hi + a.step * 1e-9; k += 1.0) t.push_back(k * a.step);
+    for (double k = std::ceil(a.lo / a.step - 1e-9); k * a.step <= a.hi + a.step * 1e-9; k += 1.0)
+        t.push_back(k * a.step);
     return t;
 }
 
@@ -172,9 +189,10 @@ void draw_legend(std::string& o, const std::vector<Drawn>& drawn, const SizingRe
                      legend_x, y - 10, ink);
     for (const Drawn& d : drawn) {
         y += 12;
-        o += fmt::format(R"(<line class="swatch" x1="{}" y1="{}" x2="{}" y2="{}" stroke="{}" stroke-width="{}" stroke-linecap="round"/>)"
-                         "\n",
-                         legend_x, y - 4, legend_x + 26, y - 4, d.colour, d.option->chosen ? 3.4 : 2.4);
+        o += fmt::format(
+            R"(<line class="swatch" x1="{}" y1="{}" x2="{}" y2="{}" stroke="{}" stroke-width="{}" stroke-linecap="round"/>)"
+            "\n",
+            legend_x, y - 4, legend_x + 26, y - 4, d.colour, d.option->chosen ? 3.4 : 2.4);
         o += fmt::format(R"(<text x="{}" y="{}" fill="{}">{}</text>)"
                          "\n",
                          legend_x + 34, y, ink, esc(d.option->label + (d.option->chosen ? " *" : "")));
@@ -193,9 +211,10 @@ void draw_legend(std::string& o, const std::vector<Drawn>& drawn, const SizingRe
                      legend_x, y, soft_ink);
     y += 26;
     const auto key = [&](const char* colour, const std::string& words) {
-        o += fmt::format(R"(<line x1="{}" y1="{}" x2="{}" y2="{}" stroke="{}" stroke-width="1.6" stroke-dasharray="7 4"/>)"
-                         "\n",
-                         legend_x, y - 4, legend_x + 26, y - 4, colour);
+        o += fmt::format(
+            R"(<line x1="{}" y1="{}" x2="{}" y2="{}" stroke="{}" stroke-width="1.6" stroke-dasharray="7 4"/>)"
+            "\n",
+            legend_x, y - 4, legend_x + 26, y - 4, colour);
         o += fmt::format(R"(<text x="{}" y="{}" fill="{}" font-size="11">{}</text>)"
                          "\n",
                          legend_x + 34, y, ink, esc(words));
@@ -216,9 +235,11 @@ std::string turn_off_svg(const SizingReport& r) {
         i_max = std::max({i_max, o.turn_off->i0_a, o.turn_off->i0_peak_a});
         drawn.push_back({&o, {}, palette[drawn.size() % std::size(palette)]});
     }
-    if (!r.spec.coil.inductance_h) throw InputError("--plot: the turn-off transient needs the coil inductance; give coil.inductance");
+    if (!r.spec.coil.inductance_h)
+        throw InputError("--plot: the turn-off transient needs the coil inductance; give coil.inductance");
     if (drawn.empty() || !(duration > 0)) {
-        throw InputError("--plot: nothing to draw; the turn-off transient needs a clamp with a diode (clamp.type is \"none\")");
+        throw InputError(
+            "--plot: nothing to draw; the turn-off transient needs a clamp with a diode (clamp.type is \"none\")");
     }
     const double t_to = duration * 1.08, t_from = -duration * 0.08;
     const double limit_v = r.sized.worst.driver.peak_limit_v;
@@ -239,9 +260,10 @@ std::string turn_off_svg(const SizingReport& r) {
                      page_w, page_h);
     o += "<title>coilfit turn-off transient</title>\n";
     for (const Panel* p : {&current, &voltage}) {
-        o += fmt::format(R"(<defs><clipPath id="clip-{}"><rect x="{}" y="{}" width="{}" height="{}"/></clipPath></defs>)"
-                         "\n",
-                         p->id, plot_x - 2, p->y - 2, plot_w + 4, panel_h + 4);
+        o +=
+            fmt::format(R"(<defs><clipPath id="clip-{}"><rect x="{}" y="{}" width="{}" height="{}"/></clipPath></defs>)"
+                        "\n",
+                        p->id, plot_x - 2, p->y - 2, plot_w + 4, panel_h + 4);
     }
     o += fmt::format(R"(<rect id="page" x="0" y="0" width="{}" height="{}" fill="#ffffff"/>)"
                      "\n",
@@ -253,10 +275,11 @@ std::string turn_off_svg(const SizingReport& r) {
     o += fmt::format(R"(<text x="{}" y="36" fill="{}" font-size="17" font-weight="700">Turn-off: {}</text>)"
                      "\n",
                      plot_x, ink, esc(name));
-    o += fmt::format(R"(<text x="{}" y="56" fill="{}" font-size="11.5">current at the slow corner (cold coil, lowest clamp )"
-                     R"(voltage); {} voltage at the highest supply and clamp voltage</text>)"
-                     "\n",
-                     plot_x, soft_ink, esc(terminal));
+    o += fmt::format(
+        R"(<text x="{}" y="56" fill="{}" font-size="11.5">current at the slow corner (cold coil, lowest clamp )"
+        R"(voltage); {} voltage at the highest supply and clamp voltage</text>)"
+        "\n",
+        plot_x, soft_ink, esc(terminal));
     draw_panel(o, current, fmt::format("coil current ({}A)", prefix(current.v.exp3)), false);
     draw_panel(o, voltage, fmt::format("{} voltage ({}V)", terminal, prefix(voltage.v.exp3)), true);
     o += fmt::format(R"(<text x="{}" y="{}" text-anchor="middle" fill="{}">time after turn-off ({}s)</text>)"
@@ -272,15 +295,17 @@ std::string turn_off_svg(const SizingReport& r) {
         draw_curve(o, current, d.series.current, d.colour, d.option->chosen, d.option->label);
         draw_curve(o, voltage, d.series.voltage, d.colour, d.option->chosen, d.option->label);
         if (d.series.release_time_s > 0 && d.series.release_time_s < t_to) {
-            o += fmt::format(R"(<circle cx="{:.2f}" cy="{:.2f}" r="3.6" fill="{}" stroke="#ffffff" stroke-width="1.2"/>)"
-                             "\n",
-                             current.px(d.series.release_time_s), current.py(i_rel), d.colour);
+            o +=
+                fmt::format(R"(<circle cx="{:.2f}" cy="{:.2f}" r="3.6" fill="{}" stroke="#ffffff" stroke-width="1.2"/>)"
+                            "\n",
+                            current.px(d.series.release_time_s), current.py(i_rel), d.colour);
         }
     }
-    o += fmt::format(R"(<text x="{}" y="{}" fill="{}" font-size="10.5">Closed-form RL decay with the clamp voltage held )"
-                     R"(constant; ringing and the switch's own turn-off neglected. Values from the datasheet limits in use.</text>)"
-                     "\n",
-                     plot_x, page_h - 14, soft_ink);
+    o += fmt::format(
+        R"(<text x="{}" y="{}" fill="{}" font-size="10.5">Closed-form RL decay with the clamp voltage held )"
+        R"(constant; ringing and the switch's own turn-off neglected. Values from the datasheet limits in use.</text>)"
+        "\n",
+        plot_x, page_h - 14, soft_ink);
     o += "</svg>\n";
     return o;
 }
