@@ -8,6 +8,8 @@ namespace {
 
 using io::pad_right;
 
+constexpr std::string_view parts_schema = "coilfit.parts/1";
+
 std::string q(double v, Unit u) { return format_quantity(v, u); }
 
 // A plain aligned table: header row, then rows.
@@ -141,6 +143,8 @@ int run_parts(const PartsOptions& options) {
     if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + io::printable(id) + "\" in the table");
 
     if (options.common.format == "json") {
+        out["schema"] = parts_schema;
+        out["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
         out["transistors"] = bip;
         out["diodes"] = dio;
         out["mosfets"] = mos;

@@ -6,6 +6,11 @@
 #include "io/report_io.hpp"
 
 namespace coilfit::cli {
+namespace {
+
+constexpr std::string_view pick_schema = "coilfit.pick/1";
+
+}  // namespace
 
 CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
     CLI::App* cmd = app.add_subcommand("pick", "try every transistor (and diode) of the parts table against a spec; list the passing ones first");
@@ -28,6 +33,9 @@ int run_pick(const PickOptions& options) {
     std::string text;
     if (options.common.format == "json") {
         io::Json j;
+        j["schema"] = pick_schema;
+        j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
+        j["name"] = spec.name;
         io::Json list = io::Json::array();
         for (std::size_t i = 0; i < n; ++i) {
             const Candidate& c = result.candidates[i];

@@ -135,8 +135,10 @@ io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table) {
     return in;
 }
 
-void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs) {
-    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}}, inputs);
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path) {
+    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
+                      inputs);
 }
 
 void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs, const std::string& flag) {
