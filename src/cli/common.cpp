@@ -97,6 +97,15 @@ void add_spec_options(CLI::App& app, SpecOptions& options) {
             options.flag_of.emplace_back(path, flag);
         });
     }
+    // Unsetting from the command line: the file's pull-down (or a preset's) is removed.
+    app.add_flag_callback(
+           "--no-pulldown",
+           [&options] {
+               options.values.emplace_back("pulldown", "none");
+               options.flag_of.emplace_back("pulldown", "--no-pulldown");
+           },
+           "no base-emitter pull-down, whatever the file gives (a bipolar driver's; an nmos gate keeps one)")
+        ->group("Spec fields (override the file)");
 }
 
 void add_common_options(CLI::App& app, CommonOptions& options, bool with_output) {
