@@ -11,6 +11,7 @@ struct SizeOptions {
     SpecOptions spec;
     CommonOptions common;
     bool strict = false;
+    bool brief = false;   // --brief: verdict, design, failing and warning checks
     std::string netlist;  // --netlist FILE
 };
 CLI::App* setup_size(CLI::App& app, SizeOptions& options);

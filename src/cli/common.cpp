@@ -1,7 +1,9 @@
 #include "cli/common.hpp"
 
+#include <sys/ioctl.h>
 #include <unistd.h>
 
+#include <algorithm>
 #include <cstdio>
 #include <cstdlib>
 #include <filesystem>
@@ -170,9 +172,19 @@ bool use_color(const std::string& output_path) {
 }
 
 std::size_t text_width() {
-    if (const char* c = std::getenv("COLUMNS")) {
-        const long n = std::strtol(c, nullptr, 10);
-        if (n >= 60 && n <= 300) return static_cast<std::size_t>(n);
+    // COLUMNS first (the user's explicit choice), then the terminal's own width, else 100; never
+    // below 40 columns, the narrowest the text layouts fit.
+    constexpr long narrowest = 40;
+    if (const char* c = std::getenv("COLUMNS"); c && *c) {
+        char* end = nullptr;
+        const long n = std::strtol(c, &end, 10);
+        if (end && *end == '\0' && n > 0) return static_cast<std::size_t>(std::clamp(n, narrowest, 1000L));
+    }
+    if (::isatty(STDOUT_FILENO) == 1) {
+        winsize ws{};
+        if (::ioctl(STDOUT_FILENO, TIOCGWINSZ, &ws) == 0 && ws.ws_col > 0) {
+            return static_cast<std::size_t>(std::max<long>(ws.ws_col, narrowest));
+        }
     }
     return 100;
 }

@@ -44,7 +44,8 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
 void emit(const std::string& text, const std::string& output_path);
 // Colour only on a terminal, never with NO_COLOR or when writing a file.
 [[nodiscard]] bool use_color(const std::string& output_path);
-// Terminal width for wrapping (COLUMNS, else 100).
+// Width of the text outputs: COLUMNS, else the terminal's (TIOCGWINSZ on standard output), else
+// 100; at least 40.
 [[nodiscard]] std::size_t text_width();
 
 }  // namespace coilfit::cli
