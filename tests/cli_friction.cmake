@@ -80,3 +80,13 @@ friction_case(clamp-type-needs-its-field 2
   "coilfit: error: dust-extractor.json: clamp.resistor: missing; a diode_resistor clamp needs a resistance such as \"470R\""
   ARGS size dust-extractor.json --clamp diode_resistor)
 friction_case(supply-band-replaces-tolerance 0 "" ARGS size ${valve} --supply-min 11V --supply-max 13.2V STDOUT_MATCH "11 V to 13.2 V")
+
+# pick: one row per driver with its best clamp diode; --all-clamps lists every pair.
+friction_case(pick-one-row-per-driver 0 "" ARGS pick ${valve}
+  STDOUT_MATCH "18 of 35 transistors .* 1 2N3904 +1N4001 \\(best of 14\\) +470 Ω"
+  STDOUT_NOT_MATCH "\n +36 ")
+friction_case(pick-all-clamps-top 0 "" ARGS pick ${valve} --all-clamps --top 3 STDOUT_MATCH "of 438 transistor and diode pairs pass.*  3 [^\n]+\n  \\.\\.\\. 435 more")
+friction_case(pick-all-clamps-stream 0 "" ARGS pick ${valve} --all-clamps STDOUT_MATCH "every pair, in table order.*[0-9]+ of 438 transistor and diode pairs pass")
+friction_case(pick-json-schema 0 "" ARGS pick ${valve} --format json --top 1
+  STDOUT_MATCH "^{\n  \"schema\": \"coilfit.pick/1\",\n  \"tool\": {\n    \"name\": \"coilfit\".*\"clamps_tried\": 14")
+friction_case(pick-json-all-clamps 0 "" ARGS pick ${valve} --format json --all-clamps STDOUT_MATCH "\"rows\": 438" STDOUT_NOT_MATCH "clamps_tried")

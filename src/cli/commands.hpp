@@ -29,6 +29,7 @@ struct PickOptions {
     SpecOptions spec;
     CommonOptions common;
     std::size_t top = 0;  // 0: all
+    bool all_clamps = false;  // --all-clamps: every transistor and diode pair
 };
 CLI::App* setup_pick(CLI::App& app, PickOptions& options);
 int run_pick(const PickOptions& options);
