@@ -13,6 +13,7 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
     add_spec_options(*cmd, options.spec);
     add_common_options(*cmd, options.common, true);
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
+    cmd->add_flag("--brief", options.brief, "text: only the verdict, the design and the failing or warning checks");
     cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
         ->check(file_name());
     cmd->add_option("--plot", options.plot,
@@ -41,6 +42,7 @@ int run_size(const SizeOptions& options) {
         io::TextStyle style;
         style.color = use_color(options.common.output);
         style.width = text_width();
+        style.brief = options.brief;
         text = io::render_text(report, style);
     }
     emit(text, options.common.output, inputs);

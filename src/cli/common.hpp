@@ -62,7 +62,8 @@ void emit(const std::string& text, const std::string& output_path, const io::Run
 [[nodiscard]] std::string message_line(const std::string& what);
 // Colour only on a terminal, never with NO_COLOR or when writing a file.
 [[nodiscard]] bool use_color(const std::string& output_path);
-// Terminal width for wrapping (COLUMNS, else 100).
+// Width of the text outputs: COLUMNS, else the terminal's (TIOCGWINSZ on standard output), else
+// 100; at least 40.
 [[nodiscard]] std::size_t text_width();
 
 }  // namespace coilfit::cli

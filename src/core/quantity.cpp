@@ -177,6 +177,10 @@ std::string format_quantity(double value, Unit unit, int significant) {
         return plain_number(value * 100.0, significant) + " %/K";
     default: break;
     }
+    // A frequency below 1 Hz reads plainly ("0.1 Hz"): "100 mHz" is misread as megahertz.
+    if (unit == Unit::hertz && std::abs(value) >= 1e-3 && std::abs(value) < 1.0) {
+        return plain_number(value, significant) + " Hz";
+    }
     static constexpr std::array<std::pair<double, std::string_view>, 8> steps{{
         {1e9, "G"}, {1e6, "M"}, {1e3, "k"}, {1.0, ""}, {1e-3, "m"}, {1e-6, "µ"}, {1e-9, "n"}, {1e-12, "p"}}};
     const double mag = std::abs(value);
