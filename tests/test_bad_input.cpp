@@ -189,7 +189,7 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: supply.voltage: expected a voltage such as "12V", got "24A" (a current))"},
         {S, spec_with("supply.voltage", -24), 2, "spec.json: supply.voltage: expected a voltage greater than zero, got -24 V"},
         {S, spec_with("supply.voltage", "0V"), 2, "spec.json: supply.voltage: expected a voltage greater than zero, got 0 V"},
-        {S, spec_with("supply.voltage", "2kV"), 2, "spec.json: supply.voltage: expected a voltage from 100 mV to 1 kV, got 2 kV"},
+        {S, spec_with("supply.voltage", "2kV"), 2, "spec.json: supply.voltage: 2 kV is not a plausible coil supply voltage (100 mV to 1 kV); did you mean 2000mV?"},
         {S, spec_with("supply.tolerance", "100%"), 2, "spec.json: supply.tolerance: expected a ratio from 0 % to 50 %, got 100 %"},
         {S, spec_with("supply.tolerance", 10), 2,
          R"(spec.json: supply.tolerance: expected a ratio from 0 % to 50 %, got 1000 % (a plain number is a fraction: write "10%" or 0.1))"},
@@ -229,7 +229,14 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("coil", io::Json{{"preset", 5}}), 2, "spec.json: coil.preset: expected a preset id in quotes, got 5"},
         // Pin.
         {S, spec_with("pin.vdd", "0V"), 2, "spec.json: pin.vdd: expected a voltage greater than zero, got 0 V"},
-        {S, spec_with("pin.vdd", "100V"), 2, "spec.json: pin.vdd: expected a voltage from 500 mV to 60 V, got 100 V"},
+        {S, spec_with("pin.vdd", "100V"), 2, "spec.json: pin.vdd: 100 V is not a plausible logic pin voltage (500 mV to 60 V)"},
+        // Plausible ranges (common practice, src/io/plausible.cpp): a plain number keeps its SI
+        // meaning, and an implausible one says what was probably meant.
+        {S, spec_with("pin.max_current", 8), 2, "spec.json: pin.max_current: 8 A is not a plausible pin current (1 µA to 200 mA); did you mean 8mA?"},
+        {S, spec_with("coil.resistance", 1), 2,
+         "spec.json: coil.resistance: 24 V across 1 Ω is 24 A, not a plausible coil current (100 µA to 20 A); did you mean 1k?"},
+        {S, spec_with("coil.resistance", 0.5), 2, "spec.json: coil.resistance: 500 mΩ is not a plausible coil resistance (1 Ω to 200 kΩ); did you mean 0.5k?"},
+        {S, spec_with("pulldown", 47), 2, "spec.json: pulldown: 47 Ω is not a plausible pull-down (100 Ω to 100 MΩ); did you mean 47k?"},
         {S, spec_with("pin.max_current", "0A"), 2, "spec.json: pin.max_current: expected a current greater than zero, got 0 A"},
         {S, spec_with("pin.vdd_tolerance", "60%"), 2, "spec.json: pin.vdd_tolerance: expected a ratio from 0 % to 50 %, got 60 %"},
         {S, with(spec_with("pin.voh", "5V"), "pin.voh_current", "8mA"), 2, "spec.json: pin.voh: expected at most pin.vdd 3.3 V, got 5 V"},
@@ -237,7 +244,7 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: pin.voh_current: missing; pin.voh needs the current it is rated at, such as "8mA")"},
         // Parts named by the spec.
         {S, spec_with("transistor", "2N9999"), 2,
-         "spec.json: transistor: no transistor \"2N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
+         "spec.json: transistor: no transistor \"2N9999\" in the parts table (" + files + "); nearest: 2N3904; `coilfit parts transistors` lists them"},
         {S, spec_with("transistor", 42), 2,
          "spec.json: transistor: expected transistor id such as a text in quotes, or an inline record, got 42"},
         {S, spec_with("transistor", with_json(good_npn, "vceo", nullptr)), 2,
@@ -256,7 +263,7 @@ std::vector<BadInput> spec_rows() {
         {S, with(spec_with("clamp.type", "diode_resistor"), "clamp.resistor", "0R"), 2,
          "spec.json: clamp.resistor: expected a resistance greater than zero, got 0 Ω"},
         {S, spec_with("clamp.diode", "1N9999"), 2,
-         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
+         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (" + files + "); nearest: 1N4937, 1N5819; `coilfit parts diodes` lists them"},
         // Base resistor, pull-down, policy.
         {S, spec_with("base_resistor.series", "E7"), 2,
          R"(spec.json: base_resistor.series: expected one of E3, E6, E12, E24, E48, E96, E192, got "E7")"},
@@ -352,7 +359,7 @@ std::vector<BadInput> flag_rows() {
         {F, "zener", 2, R"(--clamp: expected "diode", "diode_zener", "diode_resistor", "diode_tvs" or "none", got "zener")", "clamp.type", "--clamp"},
         {F, "K2 \x1b[2J", 2, R"(--name: expected a text without control characters, got "K2 \x1b[2J")", "name", "--name"},
         {F, "K2 \xff\xfe", 2, R"(--name: expected UTF-8 text, got "K2 \xff\xfe")", "name", "--name"},
-        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts` lists it", "transistor",
+        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts transistors` lists them", "transistor",
          "--transistor"},
         {F, "120%", 2, "--must-operate: expected a ratio from 0 % to 100 %, got 120 %", "coil.must_operate", "--must-operate"},
         {F, "0", 2, "--overdrive: expected a number greater than zero, got 0", "policy.overdrive", "--overdrive"},

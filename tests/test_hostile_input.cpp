@@ -99,9 +99,11 @@ std::vector<Row> rows() {
         {F, "12" + nbsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u00a0V")", "supply.voltage", "--supply"},
         {F, "12" + zwsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u200bV")", "supply.voltage", "--supply"},
         {F, bom + "12V", R"(--supply: expected a voltage such as "12V", got "\ufeff12V")", "supply.voltage", "--supply"},
-        {F, "2N4401" + zwsp, R"(--transistor: no transistor "2N4401\u200b" in the parts table ()" + files + "); `coilfit parts` lists it",
+        {F, "2N4401" + zwsp, R"(--transistor: no transistor "2N4401\u200b" in the parts table ()" + files +
+                                 "); nearest: 2N4401; `coilfit parts transistors` lists them",
          "transistor", "--transistor"},
-        {F, "1N4148" + nbsp, R"(--diode: no diode "1N4148\u00a0" in the parts table ()" + files + "); `coilfit parts` lists it", "clamp.diode",
+        {F, "1N4148" + nbsp, R"(--diode: no diode "1N4148\u00a0" in the parts table ()" + files +
+                               "); nearest: 1N4148, 1N4448; `coilfit parts diodes` lists them", "clamp.diode",
          "--diode"},
         {S, "{ \"na" + zwsp + "me\": \"K2\"," + spec_text("K2").substr(1),
          "spec.json: na\\u200bme: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, "

@@ -11,7 +11,9 @@ struct SizeOptions {
     SpecOptions spec;
     CommonOptions common;
     bool strict = false;
+    bool brief = false;   // --brief: verdict, design, failing and warning checks
     std::string netlist;  // --netlist FILE
+    std::string plot;     // --plot FILE.svg
 };
 CLI::App* setup_size(CLI::App& app, SizeOptions& options);
 int run_size(const SizeOptions& options);
@@ -28,6 +30,7 @@ struct PickOptions {
     SpecOptions spec;
     CommonOptions common;
     std::size_t top = 0;  // 0: all
+    bool all_clamps = false;  // --all-clamps: every transistor and diode pair
 };
 CLI::App* setup_pick(CLI::App& app, PickOptions& options);
 int run_pick(const PickOptions& options);

@@ -1,5 +1,6 @@
 #include "cli/common.hpp"
 
+#include <sys/ioctl.h>
 #include <unistd.h>
 
 #include <algorithm>
@@ -98,6 +99,15 @@ void add_spec_options(CLI::App& app, SpecOptions& options) {
             options.flag_of.emplace_back(path, flag);
         });
     }
+    // Unsetting from the command line: the file's pull-down (or a preset's) is removed.
+    app.add_flag_callback(
+           "--no-pulldown",
+           [&options] {
+               options.values.emplace_back("pulldown", "none");
+               options.flag_of.emplace_back("pulldown", "--no-pulldown");
+           },
+           "no base-emitter pull-down, whatever the file gives (a bipolar driver's; an nmos gate keeps one)")
+        ->group("Spec fields (override the file)");
 }
 
 void add_common_options(CLI::App& app, CommonOptions& options, bool with_output) {
@@ -135,8 +145,10 @@ io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table) {
     return in;
 }
 
-void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs) {
-    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}}, inputs);
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path) {
+    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
+                      inputs);
 }
 
 void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs, const std::string& flag) {
@@ -181,9 +193,19 @@ bool use_color(const std::string& output_path) {
 }
 
 std::size_t text_width() {
-    if (const char* c = std::getenv("COLUMNS")) {
-        const long n = std::strtol(c, nullptr, 10);
-        if (n >= 60 && n <= 300) return static_cast<std::size_t>(n);
+    // COLUMNS first (the user's explicit choice), then the terminal's own width, else 100; never
+    // below 40 columns, the narrowest the text layouts fit.
+    constexpr long narrowest = 40;
+    if (const char* c = std::getenv("COLUMNS"); c && *c) {
+        char* end = nullptr;
+        const long n = std::strtol(c, &end, 10);
+        if (end && *end == '\0' && n > 0) return static_cast<std::size_t>(std::clamp(n, narrowest, 1000L));
+    }
+    if (::isatty(STDOUT_FILENO) == 1) {
+        winsize ws{};
+        if (::ioctl(STDOUT_FILENO, TIOCGWINSZ, &ws) == 0 && ws.ws_col > 0) {
+            return static_cast<std::size_t>(std::max<long>(ws.ws_col, narrowest));
+        }
     }
     return 100;
 }

@@ -46,7 +46,8 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
 [[nodiscard]] io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table);
 // Checks the run's outputs (--output and, for size, --netlist; empty: not asked for) against its
 // inputs and each other before anything is written.
-void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs);
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path = {});
 // Writes one output through io::write_output: an empty path or "-" is standard output; a file
 // is replaced atomically, a device or FIFO written directly (io/output.hpp).
 void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs = {},
@@ -61,7 +62,8 @@ void emit(const std::string& text, const std::string& output_path, const io::Run
 [[nodiscard]] std::string message_line(const std::string& what);
 // Colour only on a terminal, never with NO_COLOR or when writing a file.
 [[nodiscard]] bool use_color(const std::string& output_path);
-// Terminal width for wrapping (COLUMNS, else 100).
+// Width of the text outputs: COLUMNS, else the terminal's (TIOCGWINSZ on standard output), else
+// 100; at least 40.
 [[nodiscard]] std::size_t text_width();
 
 }  // namespace coilfit::cli

@@ -18,8 +18,11 @@ void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Size
     const Bipolar& tr = *spec.bipolar();
     const BipolarCorner& k = f.at[static_cast<std::size_t>(sized.worst.check(CheckId::transistor_saturation).corner)];
     const std::string at = " at " + q(k.current_a, Unit::ampere);
-    notes.push_back("a transistor on this pin needs hFE min of at least " + n(k.hfe_needed) + at + " (overdrive " +
-                    n(spec.policy.overdrive) + " x coil current / pin limit " + q(spec.pin.max_current_a, Unit::ampere) + ")");
+    // When the forced-gain policy sets the base current, more gain does not help: no hFE advice.
+    if (!k.policy_binds) {
+        notes.push_back("a transistor on this pin needs hFE min of at least " + n(k.hfe_needed) + at + " (overdrive " +
+                        n(spec.policy.overdrive) + " x coil current / pin limit " + q(spec.pin.max_current_a, Unit::ampere) + ")");
+    }
     if (!spec.policy.forced_gain && tr.kind == BipolarKind::darlington) {
         notes.push_back("forced gain taken from the Darlington's Vce(sat) test ratio, " + n(k.forced_gain_policy) + ", instead of 10");
     }
@@ -153,9 +156,9 @@ std::vector<std::string> notes(const Spec& spec, const Sized& sized) {
 
 std::vector<std::string> cautions(const Spec& spec) {
     std::vector<std::string> out;
+    // Each caution once: the mains words go with the contacts' caution when there is one.
     out.emplace_back("figures are worst-case estimates from datasheet limits; the shipped parts table holds values "
-                     "from memory: confirm every part against the datasheet in use and the design on the bench; "
-                     "wiring to mains follows local electrical codes and licensed practice");
+                     "from memory: confirm every part against the datasheet in use and the design on the bench");
     const std::string contact_rules =
         "keep creepage and clearance between the coil circuit and the contacts, fuse the load, enclose live parts, "
         "and follow local electrical codes and licensed practice";
@@ -165,6 +168,8 @@ std::vector<std::string> cautions(const Spec& spec) {
             out.push_back("the contacts switch " + q(spec.load->voltage_v, Unit::volt) +
                           (spec.load->kind == LoadKind::ac ? " AC" : " DC") + ", above extra-low voltage: hazardous; " +
                           contact_rules);
+        } else {
+            out.back() += "; wiring to mains follows local electrical codes and licensed practice";
         }
     } else {
         out.push_back("if the contacts switch mains or any voltage above extra-low voltage (50 V AC, 120 V DC): " + contact_rules);

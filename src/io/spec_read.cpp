@@ -1,7 +1,11 @@
 // Spec files (schema "coilfit.spec/1") and command-line overrides into a validated Spec.
 #include <fmt/format.h>
+#include <fmt/ranges.h>
+
+#include "coilfit/id_match.hpp"
 
 #include "io/parts_read.hpp"
+#include "io/plausible.hpp"
 #include "io/sections_read.hpp"
 #include "io/spec_io.hpp"
 #include "io/spec_read_parts.hpp"
@@ -17,10 +21,17 @@ Json with_preset(const Json& obj, const std::string& kind, const PartsTable& tab
     if (!obj.is_object() || !obj.contains("preset")) return obj;
     const Json& id = obj.at("preset");
     if (!id.is_string()) fail(origin, path + ".preset", "expected a preset id in quotes, got " + describe(id));
-    const Preset* p = table.find_preset(kind, id.get<std::string>());
+    std::vector<std::string> ids;
+    for (const Preset& pr : table.presets) {
+        if (pr.kind == kind) ids.push_back(pr.id);
+    }
+    const IdMatch m = match_id(id.get<std::string>(), ids);
+    const Preset* p = m.id ? table.find_preset(kind, *m.id) : nullptr;
     if (!p) {
-        fail(origin, path + ".preset", fmt::format("no {} preset {} in the parts table; `coilfit parts {}` lists them", kind,
-                                                   describe(id), kind));
+        const auto near = nearest_ids(id.get<std::string>(), ids);
+        fail(origin, path + ".preset", fmt::format("no {} preset {} in the parts table{}; `coilfit parts {}` lists them", kind,
+                                                   describe(id), near.empty() ? std::string() : "; nearest: " + fmt::format("{}", fmt::join(near, ", ")),
+                                                   kind));
     }
     Json merged = p->fields;
     for (const auto& [k, v] : obj.items()) merged[k] = v;
@@ -32,14 +43,14 @@ void read_supply(ObjectReader& r, Spec& s) {
     const bool band = r.has("min") || r.has("max");
     if (band) {
         // An asymmetric band (a vehicle's 9 V to 16 V): min and max; the nominal is optional.
-        sup.min_v = r.within("min", r.positive("min", r.required("min", Unit::volt)), 0.1, 1000.0);
-        sup.max_v = r.within("max", r.positive("max", r.required("max", Unit::volt)), 0.1, 1000.0);
+        sup.min_v = plausible(r, "min", r.positive("min", r.required("min", Unit::volt)), Plausible::supply_voltage);
+        sup.max_v = plausible(r, "max", r.positive("max", r.required("max", Unit::volt)), Plausible::supply_voltage);
         if (*sup.min_v > *sup.max_v) {
             r.fail_at("min", fmt::format("expected at most supply.max {}, got {}", volts(*sup.max_v), volts(*sup.min_v)));
         }
         if (r.has("tolerance")) r.fail_at("tolerance", "given with supply.min and supply.max; give the band or a tolerance");
         if (auto v = r.quantity("voltage", Unit::volt)) {
-            sup.voltage_v = r.within("voltage", r.positive("voltage", *v), 0.1, 1000.0);
+            sup.voltage_v = plausible(r, "voltage", r.positive("voltage", *v), Plausible::supply_voltage);
             if (sup.voltage_v < *sup.min_v || sup.voltage_v > *sup.max_v) {
                 r.fail_at("voltage", fmt::format("expected a nominal within supply.min {} to supply.max {}, got {}",
                                                  volts(*sup.min_v), volts(*sup.max_v), volts(sup.voltage_v)));
@@ -47,7 +58,7 @@ void read_supply(ObjectReader& r, Spec& s) {
         }
         sup.tolerance = 0;
     } else {
-        sup.voltage_v = r.within("voltage", r.positive("voltage", r.required("voltage", Unit::volt)), 0.1, 1000.0);
+        sup.voltage_v = plausible(r, "voltage", r.positive("voltage", r.required("voltage", Unit::volt)), Plausible::supply_voltage);
         if (auto t = r.quantity("tolerance", Unit::ratio)) sup.tolerance = r.fraction("tolerance", *t, 0.0, 0.5, true);
         else s.defaults_used.push_back("supply.tolerance " + percent_words(sup.tolerance));
     }
@@ -143,10 +154,29 @@ void prune_clamp_fields(SpecDocument& d, const std::string& type) {
     for (const auto& key : drop) clamp->erase(key);
 }
 
+// Fields that exclude each other: a flag setting one replaces the file's other (an asymmetric
+// band from --supply-min on a file with a tolerance, --coil-thermal-resistance on a file with
+// self_heating), unless a flag of this run set it.
+void prune_exclusive(SpecDocument& d, const std::string& dotted_path) {
+    static const std::pair<const char*, const char*> exclusive[] = {
+        {"supply.min", "supply.tolerance"},       {"supply.max", "supply.tolerance"},
+        {"supply.tolerance", "supply.min"},       {"supply.tolerance", "supply.max"},
+        {"coil.thermal_resistance", "coil.self_heating"}, {"coil.self_heating", "coil.thermal_resistance"},
+    };
+    for (const auto& [set, drop] : exclusive) {
+        if (dotted_path != set || d.origin.flags.count(drop) != 0) continue;
+        const std::string path = drop;
+        const auto dot = path.find('.');
+        Json* section = d.doc.contains(path.substr(0, dot)) ? &d.doc[path.substr(0, dot)] : nullptr;
+        if (section && section->is_object()) section->erase(path.substr(dot + 1));
+    }
+}
+
 }  // namespace
 
 void set_field(SpecDocument& d, const std::string& dotted_path, Json value, const std::string& flag) {
     if (dotted_path == "clamp.type" && value.is_string()) prune_clamp_fields(d, value.get<std::string>());
+    prune_exclusive(d, dotted_path);
     Json* node = &d.doc;
     std::size_t start = 0;
     std::string path;

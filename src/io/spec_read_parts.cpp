@@ -1,7 +1,11 @@
 #include "io/spec_read_parts.hpp"
 
 #include <fmt/format.h>
+#include <fmt/ranges.h>
 
+#include "coilfit/id_match.hpp"
+
+#include "io/plausible.hpp"
 #include "io/sections_read.hpp"
 
 namespace coilfit::io::spec_parts {
@@ -13,17 +17,35 @@ std::string table_size(const PartsTable& table) {
     return table.files.empty() ? std::string("empty") : fmt::format("{} files", table.files.size());
 }
 
-// Reads a part field that is either a table id or an inline record.
+template <typename T>
+std::vector<std::string> ids_of(const std::vector<T>& parts) {
+    std::vector<std::string> out;
+    out.reserve(parts.size());
+    for (const auto& p : parts) out.push_back(p.id);
+    return out;
+}
+
+// Reads a part field that is either a table id or an inline record. An id matches exactly, else
+// case-insensitively when that names one part; an unknown id is answered with the nearest ids.
 template <typename Part, typename Find, typename ReadInline>
 Part read_part(ObjectReader& parent, const std::string& key, Find find, ReadInline read_inline, std::string_view what,
-               const PartsTable& table) {
+               const PartsTable& table, const std::vector<std::string>& ids, std::string_view kind_word) {
     const Json* v = parent.get(key);
     if (!v) parent.fail_at(key, fmt::format("missing; expected {} id from the parts table or an inline record", what));
     if (v->is_string()) {
         const auto& id = v->get_ref<const Json::string_t&>();
-        if (auto p = find(table.catalogue, id)) return *p;
-        parent.fail_at(key, fmt::format("no {} \"{}\" in the parts table ({}); `coilfit parts` lists it", what,
-                                        printable(id), table_size(table)));
+        const IdMatch m = match_id(id, ids);
+        if (m.id) {
+            if (auto p = find(table.catalogue, *m.id)) return *p;
+        }
+        if (!m.ambiguous.empty()) {
+            parent.fail_at(key, fmt::format("\"{}\" names {} parts that differ only in case: {}; give the id exactly", printable(id),
+                                            m.ambiguous.size(), fmt::join(m.ambiguous, ", ")));
+        }
+        const auto near = nearest_ids(id, ids);
+        parent.fail_at(key, fmt::format("no {} \"{}\" in the parts table ({}){}; `coilfit parts {}` lists them", what, printable(id),
+                                        table_size(table), near.empty() ? std::string() : fmt::format("; nearest: {}", fmt::join(near, ", ")),
+                                        kind_word));
     }
     if (v->is_object()) {
         ObjectReader r(*v, parent.origin(), parent.path_of(key));
@@ -51,7 +73,7 @@ void read_base_resistor(ObjectReader& r, Spec& s) {
     }
     if (auto v = r.quantity("power_rating", Unit::watt)) b.power_rating_w = r.within("power_rating", r.positive("power_rating", *v), 1e-3, 100.0);
     else s.defaults_used.push_back("base_resistor.power_rating " + format_quantity(defaults::base_resistor_power_w, Unit::watt));
-    if (auto v = r.quantity("value", Unit::ohm)) b.value_ohm = r.within("value", r.positive("value", *v), 0.1, 1e9);
+    if (auto v = r.quantity("value", Unit::ohm)) b.value_ohm = plausible(r, "value", r.positive("value", *v), Plausible::base_resistor);
     if (auto c = r.text("choose", 16)) {
         if (*c == "largest") b.choose = ResistorChoice::largest;
         else if (*c == "centred" || *c == "centered") b.choose = ResistorChoice::centred;
@@ -68,7 +90,7 @@ void read_gate_resistor(ObjectReader& r, Spec& s) {
     }
     if (auto v = r.quantity("tolerance", Unit::ratio)) g.tolerance = r.fraction("tolerance", *v, 0.0, 0.5, true);
     else g.tolerance = eseries_tolerance(g.series);
-    if (auto v = r.quantity("value", Unit::ohm)) g.value_ohm = r.within("value", r.positive("value", *v), 0.1, 1e9);
+    if (auto v = r.quantity("value", Unit::ohm)) g.value_ohm = plausible(r, "value", r.positive("value", *v), Plausible::gate_resistor);
 }
 
 void read_policy(ObjectReader& r, Spec& s) {
@@ -109,12 +131,33 @@ LoadSpec read_load(ObjectReader& r) {
     return load;
 }
 
+// "pulldown": a resistance, or "none" (--no-pulldown) for a bipolar driver without one; an
+// nmos gate always has one (src/method.md "MOSFET drivers": it holds the gate low in reset).
+void read_pulldown(ObjectReader& top, Spec& s) {
+    if (const Json* j = top.get("pulldown"); j && j->is_string() && j->get_ref<const Json::string_t&>() == "none") {
+        if (s.mosfet()) {
+            top.fail_at("pulldown", fmt::format("\"none\", but an nmos gate needs a pull-down to hold it low while the pin floats "
+                                                "(default {}); give a resistance such as \"100k\"",
+                                                format_quantity(defaults::nmos_pulldown_ohm, Unit::ohm)));
+        }
+        return;
+    }
+    if (auto v = top.quantity("pulldown", Unit::ohm)) s.pulldown_ohm = plausible(top, "pulldown", top.positive("pulldown", *v), Plausible::pulldown);
+}
+
+std::vector<std::string> transistor_ids(const Catalogue& cat) {
+    std::vector<std::string> out = ids_of(cat.bipolars);
+    for (auto&& v : {ids_of(cat.mosfets), ids_of(cat.arrays)}) out.insert(out.end(), v.begin(), v.end());
+    return out;
+}
+
 }  // namespace
 
 Transistor read_transistor_field(ObjectReader& top, const PartsTable& table) {
     return read_part<Transistor>(
         top, "transistor", [](const Catalogue& cat, const std::string& id) { return cat.find_transistor(id); },
-        [](ObjectReader& r, RecordPlace place) { return read_transistor(r, place); }, "transistor", table);
+        [](ObjectReader& r, RecordPlace place) { return read_transistor(r, place); }, "transistor", table, transistor_ids(table.catalogue),
+        "transistors");
 }
 
 void read_clamp(ObjectReader& r, Spec& s, const PartsTable& table) {
@@ -137,7 +180,7 @@ void read_clamp(ObjectReader& r, Spec& s, const PartsTable& table) {
         if (s.array() && !r.has("diode")) {
             c.diode = s.array()->diode;  // the array's built-in diode
         } else {
-            c.diode = read_part<Diode>(r, "diode", find_d, inline_d, "diode", table);
+            c.diode = read_part<Diode>(r, "diode", find_d, inline_d, "diode", table, ids_of(table.catalogue.diodes), "diodes");
         }
     } else if (r.has("diode")) {
         r.fail_at("diode", "given, but clamp.type is \"none\"");
@@ -149,17 +192,17 @@ void read_clamp(ObjectReader& r, Spec& s, const PartsTable& table) {
     };
     if (c.type == ClampType::diode_zener) {
         if (!r.has("zener")) r.fail_at("zener", "missing; a diode_zener clamp needs a zener id or an inline zener record");
-        c.zener = read_part<Zener>(r, "zener", find_z, inline_z, "zener", table);
+        c.zener = read_part<Zener>(r, "zener", find_z, inline_z, "zener", table, ids_of(table.catalogue.zeners), "zeners");
     }
     only_for("zener", ClampType::diode_zener, "diode_zener");
     if (c.type == ClampType::diode_tvs) {
         if (!r.has("tvs")) r.fail_at("tvs", "missing; a diode_tvs clamp needs a TVS id or an inline TVS record");
-        c.tvs = read_part<Tvs>(r, "tvs", find_t, inline_t, "TVS", table);
+        c.tvs = read_part<Tvs>(r, "tvs", find_t, inline_t, "TVS", table, ids_of(table.catalogue.tvs), "tvs");
     }
     only_for("tvs", ClampType::diode_tvs, "diode_tvs");
     if (c.type == ClampType::diode_resistor) {
         if (!r.has("resistor")) r.fail_at("resistor", "missing; a diode_resistor clamp needs a resistance such as \"470R\"");
-        c.resistor_ohm = r.within("resistor", r.positive("resistor", r.required("resistor", Unit::ohm)), 0.01, 1e6);
+        c.resistor_ohm = plausible(r, "resistor", r.positive("resistor", r.required("resistor", Unit::ohm)), Plausible::clamp_resistor);
         if (auto v = r.quantity("resistor_tolerance", Unit::ratio)) c.resistor_tolerance = r.fraction("resistor_tolerance", *v, 0.0, 0.5, true);
         if (auto v = r.quantity("resistor_power", Unit::watt)) c.resistor_power_w = r.within("resistor_power", r.positive("resistor_power", *v), 1e-3, 100.0);
     }
@@ -185,7 +228,7 @@ void read_drive_sections(ObjectReader& top, const SpecDocument& d, Spec& s) {
         s.gate_resistor.tolerance = eseries_tolerance(s.gate_resistor.series);
         if (s.mosfet()) s.defaults_used.push_back("gate_resistor: E24 series, 5 % tolerance");
     }
-    if (auto v = top.quantity("pulldown", Unit::ohm)) s.pulldown_ohm = top.within("pulldown", top.positive("pulldown", *v), 1.0, 1e9);
+    read_pulldown(top, s);
     const Json* policy = top.get("policy");
     const Json empty = Json::object();
     ObjectReader r(policy ? *policy : empty, d.origin, "policy");
