@@ -145,6 +145,11 @@ two-outputs-one-file)
     ln -s y.txt y-link.txt
     run 2 size spec.json -o y-link.txt --netlist y.txt
     [ "$(cat y.txt)" = keep ] || fail "y.txt changed"
+    run 2 size spec.json --netlist p.svg --plot ./p.svg
+    expect_err "coilfit: error: --plot: ./p.svg is also the file of --netlist; give each output its own file"
+    run 2 size spec.json --plot spec.json
+    expect_err "coilfit: error: --plot: spec.json is an input of this run; coilfit never writes over what it reads"
+    [ ! -e p.svg ] || fail "something was written"
     run 2 size spec.json -o - --netlist /dev/stdout
     expect_err "coilfit: error: --netlist: /dev/stdout is also the file of --output; give each output its own file"
     ;;
