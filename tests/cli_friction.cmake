@@ -90,3 +90,17 @@ friction_case(pick-all-clamps-stream 0 "" ARGS pick ${valve} --all-clamps STDOUT
 friction_case(pick-json-schema 0 "" ARGS pick ${valve} --format json --top 1
   STDOUT_MATCH "^{\n  \"schema\": \"coilfit.pick/1\",\n  \"tool\": {\n    \"name\": \"coilfit\".*\"clamps_tried\": 14")
 friction_case(pick-json-all-clamps 0 "" ARGS pick ${valve} --format json --all-clamps STDOUT_MATCH "\"rows\": 438" STDOUT_NOT_MATCH "clamps_tried")
+
+# Golden text reports of one example at 80 and 120 columns, compared exactly (tests/golden/;
+# rewrite them deliberately with COILFIT_UPDATE_GOLDEN=1 ctest -R golden, then review git diff).
+foreach(cols 80 120)
+  add_test(NAME cli.friction.golden-greenhouse-valve-${cols}
+    COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DSPEC=greenhouse-valve.json -DCOLUMNS=${cols} -DPARTS=${COILFIT_PARTS_DIR}
+            -DWORKDIR=${COILFIT_EXAMPLES_DIR} -DGOLDEN=${CMAKE_CURRENT_SOURCE_DIR}/golden/greenhouse-valve-${cols}.txt
+            -P ${CMAKE_CURRENT_SOURCE_DIR}/golden_check.cmake)
+endforeach()
+# A failing design at 80 columns: fix lines, ratios, the window in words.
+add_test(NAME cli.friction.golden-garage-door-80
+  COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DSPEC=garage-door.json -DCOLUMNS=80 -DPARTS=${COILFIT_PARTS_DIR}
+          -DWORKDIR=${COILFIT_EXAMPLES_DIR} -DGOLDEN=${CMAKE_CURRENT_SOURCE_DIR}/golden/garage-door-80.txt
+          -P ${CMAKE_CURRENT_SOURCE_DIR}/golden_check.cmake)
