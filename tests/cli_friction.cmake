@@ -104,3 +104,10 @@ add_test(NAME cli.friction.golden-garage-door-80
   COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DSPEC=garage-door.json -DCOLUMNS=80 -DPARTS=${COILFIT_PARTS_DIR}
           -DWORKDIR=${COILFIT_EXAMPLES_DIR} -DGOLDEN=${CMAKE_CURRENT_SOURCE_DIR}/golden/garage-door-80.txt
           -P ${CMAKE_CURRENT_SOURCE_DIR}/golden_check.cmake)
+
+# An inline record needs no source, and the report labels it inline.
+friction_case(inline-record-no-source 0 "" ARGS size ${CMAKE_CURRENT_SOURCE_DIR}/data/inline_no_source.json
+  STDOUT_MATCH "transistor +inline bench-npn \\(npn")
+friction_case(brief 1 "" ARGS size garage-door.json --brief
+  STDOUT_MATCH "^coilfit [0-9.]+ - garage door opener, motor relay\nResult: FAIL: 1 of 10 checks fail; worst: pin.current.\nDesign: BC547B, base resistor 560 Ω E24, pull-down 47 kΩ, clamp diode 1N4148\n  FAIL pin.current: 9.29 mA against 4 mA \\(-132 % \\(2.3x\\)\\)\n$")
+friction_case(width-40 0 "" COLUMNS 40 ARGS size ${valve} STDOUT_MATCH "\n  coil.operate  pass\n    coil voltage vs must-operate\n")
