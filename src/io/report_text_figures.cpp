@@ -26,7 +26,8 @@ constexpr std::array<std::string_view, 5> group_names{"coil", "drive", "transist
 
 std::string figures_section(const SizingReport& report, const TextStyle& style) {
     // Labels longer than the room left for them take a line of their own, the value under it.
-    const std::size_t room = style.width > 4 + 2 + 12 ? style.width - 4 - 2 - 12 : 0;
+    // (at most 56 columns, so that one long label does not push every value far right).
+    const std::size_t room = std::min<std::size_t>(56, style.width > 4 + 2 + 12 ? style.width - 4 - 2 - 12 : 0);
     std::size_t label_w = 0;
     for (const auto& e : report.quantities) {
         if (display_width(e.label) <= room) label_w = std::max(label_w, display_width(e.label));
