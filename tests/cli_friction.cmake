@@ -111,3 +111,6 @@ friction_case(inline-record-no-source 0 "" ARGS size ${CMAKE_CURRENT_SOURCE_DIR}
 friction_case(brief 1 "" ARGS size garage-door.json --brief
   STDOUT_MATCH "^coilfit [0-9.]+ - garage door opener, motor relay\nResult: FAIL: 1 of 10 checks fail; worst: pin.current.\nDesign: BC547B, base resistor 560 Ω E24, pull-down 47 kΩ, clamp diode 1N4148\n  FAIL pin.current: 9.29 mA against 4 mA \\(-132 % \\(2.3x\\)\\)\n$")
 friction_case(width-40 0 "" COLUMNS 40 ARGS size ${valve} STDOUT_MATCH "\n  coil.operate  pass\n    coil voltage vs must-operate\n")
+# Streamed JSON of every pair is one valid document: the counts follow the candidates.
+friction_case(pick-json-stream-valid 0 "" ARGS pick ${valve} --format json --all-clamps
+  STDOUT_MATCH "\"candidates\": \\[\n    {\n.*\n  \\],\n  \"rows\": 438,\n  \"passing\": [0-9]+,\n  \"reasons\": \\[\\]\n}\n$")
