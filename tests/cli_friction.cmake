@@ -90,3 +90,27 @@ friction_case(pick-all-clamps-stream 0 "" ARGS pick ${valve} --all-clamps STDOUT
 friction_case(pick-json-schema 0 "" ARGS pick ${valve} --format json --top 1
   STDOUT_MATCH "^{\n  \"schema\": \"coilfit.pick/1\",\n  \"tool\": {\n    \"name\": \"coilfit\".*\"clamps_tried\": 14")
 friction_case(pick-json-all-clamps 0 "" ARGS pick ${valve} --format json --all-clamps STDOUT_MATCH "\"rows\": 438" STDOUT_NOT_MATCH "clamps_tried")
+
+# Golden text reports of one example at 80 and 120 columns, compared exactly (tests/golden/;
+# rewrite them deliberately with COILFIT_UPDATE_GOLDEN=1 ctest -R golden, then review git diff).
+foreach(cols 80 120)
+  add_test(NAME cli.friction.golden-greenhouse-valve-${cols}
+    COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DSPEC=greenhouse-valve.json -DCOLUMNS=${cols} -DPARTS=${COILFIT_PARTS_DIR}
+            -DWORKDIR=${COILFIT_EXAMPLES_DIR} -DGOLDEN=${CMAKE_CURRENT_SOURCE_DIR}/golden/greenhouse-valve-${cols}.txt
+            -P ${CMAKE_CURRENT_SOURCE_DIR}/golden_check.cmake)
+endforeach()
+# A failing design at 80 columns: fix lines, ratios, the window in words.
+add_test(NAME cli.friction.golden-garage-door-80
+  COMMAND ${CMAKE_COMMAND} -DEXE=${COILFIT_EXE} -DSPEC=garage-door.json -DCOLUMNS=80 -DPARTS=${COILFIT_PARTS_DIR}
+          -DWORKDIR=${COILFIT_EXAMPLES_DIR} -DGOLDEN=${CMAKE_CURRENT_SOURCE_DIR}/golden/garage-door-80.txt
+          -P ${CMAKE_CURRENT_SOURCE_DIR}/golden_check.cmake)
+
+# An inline record needs no source, and the report labels it inline.
+friction_case(inline-record-no-source 0 "" ARGS size ${CMAKE_CURRENT_SOURCE_DIR}/data/inline_no_source.json
+  STDOUT_MATCH "transistor +inline bench-npn \\(npn")
+friction_case(brief 1 "" ARGS size garage-door.json --brief
+  STDOUT_MATCH "^coilfit [0-9.]+ - garage door opener, motor relay\nResult: FAIL: 1 of 10 checks fail; worst: pin.current.\nDesign: BC547B, base resistor 560 Ω E24, pull-down 47 kΩ, clamp diode 1N4148\n  FAIL pin.current: 9.29 mA against 4 mA \\(-132 % \\(2.3x\\)\\)\n$")
+friction_case(width-40 0 "" COLUMNS 40 ARGS size ${valve} STDOUT_MATCH "\n  coil.operate  pass\n    coil voltage vs must-operate\n")
+# Streamed JSON of every pair is one valid document: the counts follow the candidates.
+friction_case(pick-json-stream-valid 0 "" ARGS pick ${valve} --format json --all-clamps
+  STDOUT_MATCH "\"candidates\": \\[\n    {\n.*\n  \\],\n  \"rows\": 438,\n  \"passing\": [0-9]+,\n  \"reasons\": \\[\\]\n}\n$")

@@ -230,13 +230,6 @@ std::vector<BadInput> spec_rows() {
         // Pin.
         {S, spec_with("pin.vdd", "0V"), 2, "spec.json: pin.vdd: expected a voltage greater than zero, got 0 V"},
         {S, spec_with("pin.vdd", "100V"), 2, "spec.json: pin.vdd: 100 V is not a plausible logic pin voltage (500 mV to 60 V)"},
-        // Plausible ranges (common practice, src/io/plausible.cpp): a plain number keeps its SI
-        // meaning, and an implausible one says what was probably meant.
-        {S, spec_with("pin.max_current", 8), 2, "spec.json: pin.max_current: 8 A is not a plausible pin current (1 µA to 200 mA); did you mean 8mA?"},
-        {S, spec_with("coil.resistance", 1), 2,
-         "spec.json: coil.resistance: 24 V across 1 Ω is 24 A, not a plausible coil current (100 µA to 20 A); did you mean 1k?"},
-        {S, spec_with("coil.resistance", 0.5), 2, "spec.json: coil.resistance: 500 mΩ is not a plausible coil resistance (1 Ω to 200 kΩ); did you mean 0.5k?"},
-        {S, spec_with("pulldown", 47), 2, "spec.json: pulldown: 47 Ω is not a plausible pull-down (100 Ω to 100 MΩ); did you mean 47k?"},
         {S, spec_with("pin.max_current", "0A"), 2, "spec.json: pin.max_current: expected a current greater than zero, got 0 A"},
         {S, spec_with("pin.vdd_tolerance", "60%"), 2, "spec.json: pin.vdd_tolerance: expected a ratio from 0 % to 50 %, got 60 %"},
         {S, with(spec_with("pin.voh", "5V"), "pin.voh_current", "8mA"), 2, "spec.json: pin.voh: expected at most pin.vdd 3.3 V, got 5 V"},

@@ -13,14 +13,26 @@ using io::pad_right;
 
 std::string q(double v, Unit u) { return format_quantity(v, u); }
 
-// A plain aligned table: header row, then rows.
+// A plain aligned table: header row, then rows; each row stacked as "header: value" lines when
+// the table is wider than the screen.
 std::string table_text(const std::vector<std::vector<std::string>>& rows) {
     std::vector<std::size_t> w;
     for (const auto& r : rows) {
         if (w.size() < r.size()) w.resize(r.size(), 0);
         for (std::size_t i = 0; i < r.size(); ++i) w[i] = std::max(w[i], io::display_width(r[i]));
     }
+    std::size_t total = 1;
+    for (const std::size_t x : w) total += x + 1;
     std::string out;
+    if (total > text_width() && !rows.empty()) {
+        for (std::size_t k = 1; k < rows.size(); ++k) {
+            out += "  " + rows[k][0] + "\n";
+            for (std::size_t i = 1; i < rows[k].size() && i < rows[0].size(); ++i) {
+                out += "    " + io::wrap(rows[0][i] + ": " + rows[k][i], text_width(), 6) + "\n";
+            }
+        }
+        return out;
+    }
     for (const auto& r : rows) {
         std::string line = " ";
         for (std::size_t i = 0; i < r.size(); ++i) line += " " + (i + 1 < r.size() ? pad_right(r[i], w[i]) : r[i]);

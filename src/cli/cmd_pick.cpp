@@ -110,6 +110,101 @@ CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
     return cmd;
 }
 
+namespace {
+
+// Where pick writes: standard output as it goes, or a file replaced whole at the end.
+struct Output {
+    std::string path;
+    io::RunInputs inputs;
+    std::string buffer;
+    void put(const std::string& text) {
+        if (path.empty()) emit(text, "");
+        else buffer += text;
+    }
+    void finish() const {
+        if (!path.empty()) emit(buffer, path, inputs);
+    }
+};
+
+io::Json head_json(const Spec& spec, const PickSettings& settings) {
+    io::Json j;
+    j["schema"] = pick_schema;
+    j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
+    j["name"] = spec.name;
+    j["all_clamps"] = settings.all_clamps;
+    return j;
+}
+
+std::string summary_words(const PickResult& result, const PickSettings& settings) {
+    const std::string what = settings.all_clamps ? "transistor and diode pairs" : "transistors (each with its best clamp diode)";
+    return fmt::format("{} of {} {} pass at worst case", result.passing, result.rows, what);
+}
+
+// Ranked rows (one per transistor, or the best --top N), printed once they are all known.
+std::string ranked_text(const Spec& spec, const PickResult& result, const PickOptions& options, const io::TextStyle& style) {
+    std::vector<std::array<std::string, 7>> rows;
+    std::vector<Verdict> verdicts;
+    for (const Candidate& c : result.candidates) {
+        rows.push_back(row_cells(rows.size() + 1, c, options.all_clamps));
+        verdicts.push_back(c.verdict);
+    }
+    PickSettings settings;
+    settings.all_clamps = options.all_clamps;
+    std::string text = io::wrap(fmt::format("coilfit pick - {}: {}", title(spec), summary_words(result, settings)), style.width, 2) + "\n\n";
+    text += table_text(rows, verdicts, style);
+    if (result.candidates.size() < result.rows) text += fmt::format("  ... {} more (--top 0 lists all)\n", result.rows - result.candidates.size());
+    return text + footer(result, options);
+}
+
+// Every pair of the table, written as the rows are made (JSON too): nothing is kept.
+PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickSettings& settings, const PickOptions& options,
+                      const io::TextStyle& style, Output& out) {
+    const bool json = options.common.format == "json";
+    // Fixed columns for the batches: the longest ids of the table.
+    std::array<std::size_t, 7> widths{0, 10, 11, 8, 21, 7, 7};
+    for (const auto& b : table.catalogue.bipolars) widths[1] = std::max(widths[1], io::display_width(b.id));
+    for (const auto& m : table.catalogue.mosfets) widths[1] = std::max(widths[1], io::display_width(m.id));
+    for (const auto& a : table.catalogue.arrays) widths[1] = std::max(widths[1], io::display_width(a.id));
+    for (const auto& d : table.catalogue.diodes) widths[2] = std::max(widths[2], io::display_width(d.id));
+    std::vector<std::array<std::string, 7>> rows;
+    std::vector<Verdict> verdicts;
+    bool first = true;
+    const auto flush = [&] {
+        if (!rows.empty()) out.put(table_text(rows, verdicts, style, widths, first));
+        first = first && rows.empty();
+        rows.clear();
+        verdicts.clear();
+    };
+    if (json) {
+        const std::string head = head_json(spec, settings).dump(2);
+        out.put(head.substr(0, head.size() - 2) + ",\n  \"candidates\": [");
+    } else {
+        out.put(io::wrap(fmt::format("coilfit pick - {}: every pair, in table order", title(spec)), style.width, 2) + "\n\n");
+    }
+    const PickResult result = pick_each(spec, table.catalogue, settings, [&](const Candidate& c) {
+        if (json) {
+            std::string item = candidate_json(c, true).dump(2);
+            for (std::size_t at = item.find('\n'); at != std::string::npos; at = item.find('\n', at + 1)) item.insert(at + 1, "    ");
+            out.put(std::string(first ? "\n    " : ",\n    ") + item);
+            first = false;
+            return;
+        }
+        rows.push_back(row_cells(0, c, true));
+        verdicts.push_back(c.verdict);
+        if (rows.size() == 64) flush();  // a batch at a time
+    });
+    if (json) {
+        const std::string tail = io::Json{{"rows", result.rows}, {"passing", result.passing}, {"reasons", result.reasons}}.dump(2);
+        out.put(std::string(first ? "]," : "\n  ],") + tail.substr(1) + "\n");
+    } else {
+        flush();
+        out.put("\n" + summary_words(result, settings) + ".\n" + footer(result, options));
+    }
+    return result;
+}
+
+}  // namespace
+
 int run_pick(const PickOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
@@ -118,69 +213,29 @@ int run_pick(const PickOptions& options) {
     PickSettings settings;
     settings.top = options.top;
     settings.all_clamps = options.all_clamps;
-    const bool json = options.common.format == "json";
-    // Every pair of the table, unranked across transistors: rows are written as they come.
-    const bool stream = settings.all_clamps && settings.top == 0;
     io::TextStyle style;
     style.color = use_color(options.common.output);
     style.width = text_width();
-
-    io::Json list = io::Json::array();
-    std::vector<std::array<std::string, 7>> rows;
-    std::vector<Verdict> verdicts;
-    std::string streamed;
-    // Fixed columns for streamed batches: the longest ids of the table.
-    std::array<std::size_t, 7> widths{1, 10, 11, 8, 21, 7, 7};
-    for (const auto& b : table.catalogue.bipolars) widths[1] = std::max(widths[1], io::display_width(b.id));
-    for (const auto& m : table.catalogue.mosfets) widths[1] = std::max(widths[1], io::display_width(m.id));
-    for (const auto& a : table.catalogue.arrays) widths[1] = std::max(widths[1], io::display_width(a.id));
-    for (const auto& d : table.catalogue.diodes) widths[2] = std::max(widths[2], io::display_width(d.id));
-    widths[0] = 0;
-    const auto add = [&](const Candidate& c) {
-        if (json) {
-            list.push_back(candidate_json(c, settings.all_clamps));
-            return;
-        }
-        rows.push_back(row_cells(stream ? 0 : rows.size() + 1, c, settings.all_clamps));
-        verdicts.push_back(c.verdict);
-        if (stream && rows.size() == 64) {  // a batch at a time: the rows are not all kept
-            streamed += table_text(rows, verdicts, style, widths, streamed.empty());
-            rows.clear();
-            verdicts.clear();
-        }
-    };
+    Output out{options.common.output, inputs, {}};
     PickResult result;
-    if (stream) {
-        result = pick_each(spec, table.catalogue, settings, add);
+    if (settings.all_clamps && settings.top == 0) {
+        result = run_stream(spec, table, settings, options, style, out);
     } else {
         result = pick(spec, table.catalogue, settings);
-        for (const Candidate& c : result.candidates) add(c);
-    }
-    std::string text;
-    if (json) {
-        io::Json j;
-        j["schema"] = pick_schema;
-        j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
-        j["name"] = spec.name;
-        j["all_clamps"] = settings.all_clamps;
-        j["rows"] = result.rows;
-        j["passing"] = result.passing;
-        j["candidates"] = std::move(list);
-        j["reasons"] = result.reasons;
-        text = j.dump(2) + "\n";
-    } else {
-        const std::string what = settings.all_clamps ? "transistor and diode pairs" : "transistors (each with its best clamp diode)";
-        const std::string summary = fmt::format("{} of {} {} pass at worst case", result.passing, result.rows, what);
-        text = io::wrap(fmt::format("coilfit pick - {}: {}", title(spec), stream ? std::string("every pair, in table order") : summary),
-                        style.width, 2) + "\n\n";
-        text += streamed + (stream ? table_text(rows, verdicts, style, widths, streamed.empty()) : table_text(rows, verdicts, style));
-        if (stream) text += "\n" + summary + ".\n";
-        if (!stream && result.candidates.size() < result.rows) {
-            text += fmt::format("  ... {} more (--top 0 lists all)\n", result.rows - result.candidates.size());
+        if (options.common.format == "json") {
+            io::Json j = head_json(spec, settings);
+            j["rows"] = result.rows;
+            j["passing"] = result.passing;
+            io::Json list = io::Json::array();
+            for (const Candidate& c : result.candidates) list.push_back(candidate_json(c, settings.all_clamps));
+            j["candidates"] = std::move(list);
+            j["reasons"] = result.reasons;
+            out.put(j.dump(2) + "\n");
+        } else {
+            out.put(ranked_text(spec, result, options, style));
         }
-        text += footer(result, options);
     }
-    emit(text, options.common.output, inputs);
+    out.finish();
     return result.passing > 0 ? exit_pass : exit_fail;
 }
 

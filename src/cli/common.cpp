@@ -49,7 +49,7 @@ constexpr SpecFlag spec_flags[] = {
     {"--pin-voh", "pin.voh", "guaranteed output high voltage at --pin-voh-current, e.g. 2.9V"},
     {"--pin-voh-current", "pin.voh_current", "current of the VOH rating, e.g. 8mA"},
     {"--pin-voh-vdd", "pin.voh_vdd", "the pin supply VOH is stated at (default the lowest VDD)"},
-    {"--pin-max-current", "pin.max_current", "most the pin may source, e.g. 8mA"},
+    {"--pin-max-current", "pin.max_current", "the pin's rated output current, e.g. 8mA"},
     {"--transistor", "transistor", "transistor id from the parts table (npn, darlington, nmos or array), e.g. 2N4401"},
     {"--clamp", "clamp.type", "clamp: diode, diode_zener, diode_resistor, diode_tvs or none"},
     {"--diode", "clamp.diode", "clamp diode id, e.g. 1N4148"},

@@ -104,8 +104,9 @@ std::vector<std::optional<Diode>> diodes_to_try(const Spec& spec, const Catalogu
     return diodes;
 }
 
-// Tries one transistor with every diode; hands over its best row, or each pair's row ranked.
-void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::optional<Diode>>& diodes, bool all_clamps,
+// Tries one transistor with every diode; hands over its best row, or each pair's row (ranked
+// among themselves when rank_pairs: a heap that ranks them anyway does not need it).
+void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::optional<Diode>>& diodes, bool all_clamps, bool rank_pairs,
                     pick_detail::FamilyFailures& failures, PickResult& counts, const std::function<void(const Candidate&)>& row) {
     // A forced gain written for the spec's own kind of transistor does not carry over: a
     // Darlington tried for an npn spec (or the other way round) takes its kind's default.
@@ -139,7 +140,7 @@ void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::option
         best->clamps_passing = passing;
         pairs.push_back(std::move(*best));
     }
-    std::sort(pairs.begin(), pairs.end(), ranks_before);
+    if (rank_pairs) std::sort(pairs.begin(), pairs.end(), ranks_before);
     for (const Candidate& c : pairs) {
         ++counts.rows;
         counts.passing += c.verdict == Verdict::pass ? 1U : 0U;
@@ -147,9 +148,7 @@ void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::option
     }
 }
 
-}  // namespace
-
-PickResult pick_each(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings,
+PickResult pick_rows(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings, bool rank_pairs,
                      const std::function<void(const Candidate&)>& row) {
     PickResult result;
     const std::vector<std::optional<Diode>> diodes = diodes_to_try(spec, catalogue);
@@ -159,7 +158,7 @@ PickResult pick_each(const Spec& spec, const Catalogue& catalogue, const PickSet
     const auto each = [&](const auto& parts) {
         for (const auto& part : parts) {
             trial.transistor = part;
-            try_transistor(trial, spec, diodes, settings.all_clamps, failures, result, row);
+            try_transistor(trial, spec, diodes, settings.all_clamps, rank_pairs, failures, result, row);
         }
     };
     each(catalogue.bipolars);
@@ -169,11 +168,18 @@ PickResult pick_each(const Spec& spec, const Catalogue& catalogue, const PickSet
     return result;
 }
 
+}  // namespace
+
+PickResult pick_each(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings,
+                     const std::function<void(const Candidate&)>& row) {
+    return pick_rows(spec, catalogue, settings, true, row);
+}
+
 PickResult pick(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings) {
     // A bounded heap of the best `top` rows, the worst kept on top so it leaves first.
     std::vector<Candidate> kept;
     const std::size_t top = settings.top;
-    PickResult result = pick_each(spec, catalogue, settings, [&](const Candidate& c) {
+    PickResult result = pick_rows(spec, catalogue, settings, false, [&](const Candidate& c) {
         if (top != 0 && kept.size() == top) {
             if (!ranks_before(c, kept.front())) return;
             std::pop_heap(kept.begin(), kept.end(), ranks_before);

@@ -41,15 +41,24 @@ std::string verdict_line(const SizingReport& report, const TextStyle& style) {
         warns += c.verdict == Verdict::warn ? 1U : 0U;
         checked += c.verdict != Verdict::skip ? 1U : 0U;
     }
+    // Wrapped plain, then the verdict word painted (escape codes take no columns).
+    const auto line = [&](std::string_view word, Verdict colour, const std::string& rest) {
+        const std::string plain = wrap(std::string(word) + rest, style.width, 2);
+        return paint(word, colour, style) + plain.substr(word.size()) + "\n";
+    };
     if (report.verdict == Verdict::pass) {
-        const std::string rest = warns ? fmt::format(" with {} warning{}: every check holds at worst case; read the warnings", warns,
+        const std::string rest = warns ? fmt::format(" with {} warning{}: every check holds at worst case; read the warnings.", warns,
                                                      warns == 1 ? "" : "s")
-                                       : std::string(": every check holds at worst case");
-        return paint("Result: PASS", warns ? Verdict::warn : Verdict::pass, style) + rest + ".\n";
+                                       : std::string(": every check holds at worst case.");
+        return line("Result: PASS", warns ? Verdict::warn : Verdict::pass, rest);
     }
     const Check* w = report.worst_check();
-    return paint("Result: FAIL", Verdict::fail, style) +
-           fmt::format(": {} of {} checks fail{}.\n", fails, checked, w ? "; worst: " + w->id : std::string());
+    return line("Result: FAIL", Verdict::fail, fmt::format(": {} of {} checks fail{}.", fails, checked, w ? "; worst: " + w->id : std::string()));
+}
+
+std::string title_line(const SizingReport& report, const TextStyle& style) {
+    return wrap(fmt::format("coilfit {} - {}", COILFIT_VERSION, report.spec.name.empty() ? std::string("unnamed channel") : report.spec.name),
+                style.width, 2) + "\n";
 }
 
 }  // namespace text
@@ -197,7 +206,7 @@ namespace {
 
 // --brief: the verdict, the design and the failing or warning checks, about 12 lines at most.
 std::string render_brief(const SizingReport& report, const TextStyle& style) {
-    std::string out = fmt::format("coilfit {} - {}\n", COILFIT_VERSION, report.spec.name.empty() ? std::string("unnamed channel") : report.spec.name);
+    std::string out = text::title_line(report, style);
     out += text::verdict_line(report, style);
     out += text::design_brief(report, style);
     out += text::checks_brief(report, style, 8);
@@ -208,7 +217,7 @@ std::string render_brief(const SizingReport& report, const TextStyle& style) {
 
 std::string render_text(const SizingReport& report, const TextStyle& style) {
     if (style.brief) return render_brief(report, style);
-    std::string out = fmt::format("coilfit {} - {}\n", COILFIT_VERSION, report.spec.name.empty() ? std::string("unnamed channel") : report.spec.name);
+    std::string out = text::title_line(report, style);
     out += text::verdict_line(report, style) + "\n";
     out += text::design_section(report, style);
     out += text::checks_section(report, style);

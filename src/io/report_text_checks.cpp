@@ -127,15 +127,21 @@ std::string checks_section(const SizingReport& report, const TextStyle& style) {
     }
     // verdict, check, value, limit, margin, then what it compared in the rest of the line.
     const std::size_t fixed = 2 + 4 + 2 + iw + 2 + vw + 2 + lw + 2 + mw + 2;
-    if (fixed + 20 > style.width) return out + stacked(rows, style) + "\n";
+    if (fixed > style.width) return out + stacked(rows, style) + "\n";
+    // Room for what it compared beside the numbers, else on a line of its own under them.
+    const bool beside = fixed + 28 <= style.width;
+    constexpr std::size_t indent = 8;
     out += "  " + pad_right("", 4) + "  " + pad_right("check", iw) + "  " + pad_left("value", vw) + "  " + pad_left("limit", lw) + "  " +
-           pad_left("margin", mw) + "  compared\n";
+           pad_left("margin", mw) + (beside ? "  compared" : "") + "\n";
     for (const Row& r : rows) {
         const Check& c = *r.check;
-        out += "  " + paint(pad_right(verdict_word(c.verdict), 4), c.verdict, style) + "  " + pad_right(c.id, iw) + "  " +
-               pad_left(r.value, vw) + "  " + pad_left(r.limit, lw) + "  " + pad_left(r.margin, mw) + "  " + wrap(r.what, style.width, fixed) + "\n";
+        std::string line = "  " + paint(pad_right(verdict_word(c.verdict), 4), c.verdict, style) + "  " + pad_right(c.id, iw) + "  " +
+                           pad_left(r.value, vw) + "  " + pad_left(r.limit, lw) + "  " + pad_left(r.margin, mw);
+        if (c.verdict == Verdict::skip) line = "  " + paint("skip", c.verdict, style) + "  " + c.id;
+        if (beside) line = pad_right(line, fixed) + wrap(r.what, style.width, fixed);
+        else line += "\n" + std::string(indent, ' ') + wrap(r.what, style.width, indent);
+        out += line + "\n";
         if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) {
-            constexpr std::size_t indent = 8;
             out += std::string(indent, ' ') + "fix: " + wrap(fix_words(c), style.width, indent + 5) + "\n";
         }
     }

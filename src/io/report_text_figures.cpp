@@ -25,9 +25,13 @@ constexpr std::array<std::string_view, 5> group_names{"coil", "drive", "transist
 }  // namespace
 
 std::string figures_section(const SizingReport& report, const TextStyle& style) {
+    // Labels longer than the room left for them take a line of their own, the value under it.
+    // (at most 56 columns, so that one long label does not push every value far right).
+    const std::size_t room = std::min<std::size_t>(56, style.width > 4 + 2 + 12 ? style.width - 4 - 2 - 12 : 0);
     std::size_t label_w = 0;
-    for (const auto& e : report.quantities) label_w = std::max(label_w, display_width(e.label));
-    const bool narrow = label_w + 16 > style.width;
+    for (const auto& e : report.quantities) {
+        if (display_width(e.label) <= room) label_w = std::max(label_w, display_width(e.label));
+    }
     std::string out = heading("Figures");
     for (std::size_t g = 0; g < group_names.size(); ++g) {
         bool first = true;
@@ -35,8 +39,11 @@ std::string figures_section(const SizingReport& report, const TextStyle& style) 
             if (group_of(e.key) != g) continue;
             if (first) out += "  " + std::string(group_names[g]) + "\n";
             first = false;
-            if (narrow) out += "    " + wrap(e.label + ": " + qf(e.value, e.unit), style.width, 6) + "\n";
-            else out += "    " + pad_right(e.label, label_w) + "  " + qf(e.value, e.unit) + "\n";
+            if (display_width(e.label) > label_w) {
+                out += "    " + wrap(e.label, style.width, 4) + "\n    " + pad_right("", label_w) + "  " + qf(e.value, e.unit) + "\n";
+            } else {
+                out += "    " + pad_right(e.label, label_w) + "  " + qf(e.value, e.unit) + "\n";
+            }
         }
     }
     return out + "\n";
@@ -44,13 +51,13 @@ std::string figures_section(const SizingReport& report, const TextStyle& style) 
 
 std::string clamp_options_section(const SizingReport& report, const TextStyle& style) {
     if (report.clamp_options.empty()) return {};
-    std::string out = heading("Clamp options (faster release costs collector voltage)");
+    std::string out = wrap("Clamp options (faster release costs collector voltage)", style.width, 2) + "\n";
     std::size_t ow = 6;
     for (const auto& o : report.clamp_options) ow = std::max(ow, display_width(o.label));
-    const bool narrow = 4 + ow + 3 * 11 + 15 > style.width;
+    const bool narrow = 4 + ow + 3 * 11 + 11 > style.width;
     if (!narrow) {
         out += "    " + pad_right("clamp", ow) + "  " + pad_left("peak Vce", 9) + "  " + pad_left("release", 9) + "  " + pad_left("energy", 9) +
-               "  within rating\n";
+               "  in rating\n";
     }
     for (const auto& o : report.clamp_options) {
         const std::string mark = o.chosen ? "  > " : "    ";

@@ -15,6 +15,8 @@ namespace coilfit::io::text {
 // "label  text" with the text wrapped under itself; the label column is `label_w` wide.
 [[nodiscard]] std::string labelled(std::string_view label, const std::string& text, const TextStyle& style, std::size_t label_w = 15);
 
+// "coilfit 0.1.0 - channel name", wrapped.
+[[nodiscard]] std::string title_line(const SizingReport& report, const TextStyle& style);
 // "PASS: every check holds at worst case." / "FAIL: 3 of 13 checks fail; worst: pin.current".
 [[nodiscard]] std::string verdict_line(const SizingReport& report, const TextStyle& style);
 // The parts and values of the design; the resistor window in words when no resistor fits.
