@@ -179,7 +179,7 @@ void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& 
     if (!list) top.fail_at("channels", "missing; expected a list of channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... } ]");
     if (!list->is_array() || list->empty()) {
         top.fail_at("channels", "expected a list of one or more channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... } ], got " +
-                                    describe(*list));
+                                    (list->is_array() ? std::string("an empty list") : describe(*list)));
     }
     std::map<std::string, std::size_t> pin_owner;  // pin -> channel
     std::vector<std::string> places;                // channel -> its entry's place in the file

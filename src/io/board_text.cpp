@@ -142,7 +142,8 @@ std::string result_line(const BoardReport& report, const TextStyle& style) {
     for (std::size_t i = 0; i < report.channels.size(); ++i) {
         if (report.channels[i].verdict == Verdict::fail) channels.push_back(i);
     }
-    if (!channels.empty()) failed.push_back(set_words(report.board, channels));
+    if (channels.size() == 1) failed.push_back(report.board.channels[channels.front()].spec.name);
+    else if (!channels.empty()) failed.push_back(set_words(report.board, channels));
     std::string list;
     for (std::size_t k = 0; k < failed.size(); ++k) list += (k ? "; " : "") + failed[k];
     const std::size_t boards = report.failed_board_checks();
@@ -168,6 +169,9 @@ std::string render_board_text(const BoardReport& report, const TextStyle& style,
         if (!found.empty()) out += "What fails or warns\n" + found + "\n";
         out += "Notes\n";
         for (const auto& n : report.notes) out += "  - " + wrap(n, style.width, 4) + "\n";
+        for (const BoardCheck& b : report.checks) {
+            if (b.check.verdict == Verdict::skip) out += "  - " + wrap(b.check.id + " (" + b.subject + "): " + b.check.reason, style.width, 4) + "\n";
+        }
         out += "  - " + wrap("`coilfit board BOARD --channel NAME` prints a channel's full report", style.width, 4) + "\n\n";
     }
     out += "Cautions\n";
