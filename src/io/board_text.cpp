@@ -85,6 +85,13 @@ std::string channel_table(const BoardReport& report, const TextStyle& style) {
     return t.render(style, 6);
 }
 
+// The set for the table: its words, or a count when they would not fit (a check's message has them all).
+std::string short_set(const Board& board, const std::vector<std::size_t>& set) {
+    std::string words = set_words(board, set);
+    if (display_width(words) <= 48) return words;
+    return fmt::format("{} of {} channels", set.size(), board.channels.size());
+}
+
 std::string board_check_table(const BoardReport& report, const TextStyle& style, bool brief) {
     Table t;
     t.rows.push_back({"check", "subject", "value", "limit", "margin", "verdict", "channels on"});
@@ -93,7 +100,7 @@ std::string board_check_table(const BoardReport& report, const TextStyle& style,
         const Check& c = b.check;
         if (brief && c.verdict != Verdict::fail && c.verdict != Verdict::warn) continue;
         t.rows.push_back({c.id, b.subject, c.value ? qf(*c.value, c.unit) : "", c.limit ? qf(*c.limit, c.unit) : "",
-                          margin_text(c.margin), verdict_word(c.verdict), set_words(report.board, b.set)});
+                          margin_text(c.margin), verdict_word(c.verdict), short_set(report.board, b.set)});
         t.verdicts.push_back(c.verdict);
     }
     if (t.rows.size() == 1) return "  (none fails or warns)\n";
