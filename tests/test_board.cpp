@@ -269,3 +269,31 @@ TEST_SUITE("board") {
         CHECK_THROWS_WITH_AS(read(bad), doctest::Contains("b.json: channels[1].pulldwn: unknown key"), InputError);
     }
 }
+
+TEST_SUITE("board") {
+    TEST_CASE("a channel may override the mcu's pin ratings and give a supply of its own") {
+        std::string text = manifold;
+        text.replace(text.find(" SIMULTANEOUS"), 13, "");
+        text.replace(text.find(R"("pin": "PA0")"), 12, R"("pin": { "name": "PA0", "max_current": "4mA" }, "supply": { "voltage": "24V" })");
+        const Board b = io::read_board(io::parse_board_text(text, "b.json"), test::shipped_table());
+        CHECK(b.channels[0].pin == "PA0");
+        CHECK(b.channels[0].spec.pin.max_current_a == Approx(0.004));
+        CHECK(b.channels[0].spec.pin.vdd_v == Approx(3.3));
+        CHECK(b.channels[1].spec.pin.max_current_a == Approx(0.008));
+        CHECK(b.channels[0].spec.supply.voltage_v == Approx(24));
+        CHECK_FALSE(b.channels[0].board_supply);
+        // The pilot on its own supply is left out of supply.current: five valves, coil and drive.
+        const BoardReport r = size_board(b, test::shipped_table().catalogue);
+        CHECK(*find(r, "supply.current", "supply").check.value == Approx(5 * (i_cold_a + pin_array_a)).epsilon(1e-9));
+    }
+
+    TEST_CASE("two channels of one name are rejected, naming the second") {
+        std::string text = manifold;
+        text.replace(text.find(" SIMULTANEOUS"), 13, "");
+        text.replace(text.find(R"("name": "V4-V5")"), 15, R"("name": "V1-V3 #2")");
+        CHECK_THROWS_WITH_AS((void)io::read_board(io::parse_board_text(text, "b.json"), test::shipped_table()),
+                             "b.json: channels[2].name: \"V1-V3 #2\" is already the name of a channel of channels[1]; give every "
+                             "channel a name of its own",
+                             InputError);
+    }
+}

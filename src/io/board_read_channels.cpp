@@ -182,10 +182,20 @@ void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& 
                                     (list->is_array() ? std::string("an empty list") : describe(*list)));
     }
     std::map<std::string, std::size_t> pin_owner;  // pin -> channel
+    std::map<std::string, std::size_t> name_owner;  // a channel's or an entry's name -> entry
     std::vector<std::string> places;                // channel -> its entry's place in the file
     for (std::size_t k = 0; k < list->size(); ++k) {
         const std::string at = "channels[" + std::to_string(k) + "]";
         Entry e = read_entry((*list)[k], at, d, table, base, defaults, board);
+        // Names pick channels (--channel, simultaneous.groups): each names one entry.
+        std::vector<std::string> names{e.name};
+        for (std::size_t r = 0; e.pins.size() > 1 && r < e.pins.size(); ++r) names.push_back(e.name + " #" + std::to_string(r + 1));
+        for (const std::string& name : names) {
+            if (const auto [it, added] = name_owner.emplace(name, k); !added && it->second != k) {
+                fail(d.origin, at + ".name", fmt::format("{} is already the name of a channel of channels[{}]; give every channel a name of its own",
+                                                         in_quotes(name), it->second));
+            }
+        }
         if (board.channels.size() + e.pins.size() > max_board_channels) {
             fail(d.origin, at + ".count", fmt::format("the board would have more than {} channels", max_board_channels));
         }
