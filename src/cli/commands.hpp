@@ -47,4 +47,14 @@ struct YieldOptions {
 CLI::App* setup_yield(CLI::App& app, YieldOptions& options);
 int run_yield(const YieldOptions& options);
 
+struct BoardOptions {
+    std::string board_path;
+    CommonOptions common;
+    bool brief = false;
+    bool strict = false;
+    std::string channel;  // --channel NAME: that channel's full report
+};
+CLI::App* setup_board(CLI::App& app, BoardOptions& options);
+int run_board(const BoardOptions& options);
+
 }  // namespace coilfit::cli

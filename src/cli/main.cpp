@@ -23,6 +23,8 @@ int main(int argc, char** argv) {
     CLI::App* parts_cmd = setup_parts(app, parts_options);
     CLI::App* pick_cmd = setup_pick(app, pick_options);
     CLI::App* yield_cmd = setup_yield(app, yield_options);
+    BoardOptions board_options;
+    CLI::App* board_cmd = setup_board(app, board_options);
 
     try {
         app.parse(argc, argv);
@@ -36,6 +38,7 @@ int main(int argc, char** argv) {
         if (parts_cmd->parsed()) return run_parts(parts_options);
         if (pick_cmd->parsed()) return run_pick(pick_options);
         if (yield_cmd->parsed()) return run_yield(yield_options);
+        if (board_cmd->parsed()) return run_board(board_options);
     } catch (const coilfit::InputError& e) {
         std::cerr << "coilfit: error: " << message_line(e.what()) << "\n";
         return exit_bad_input;

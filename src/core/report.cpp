@@ -14,7 +14,8 @@ std::string check_message(CheckId id, const CheckValue& c, const Spec& spec, con
     case Stage::coil: return coil_message(id, c, spec, e);
     case Stage::clamp: return clamp_message(id, c, spec, e);
     case Stage::timing: return timing_message(id, c, spec, e);
-    case Stage::contact: return {};
+    case Stage::contact:
+    case Stage::board: return {};  // a board's checks are worded in src/core/board_words.cpp
     case Stage::driver: break;
     }
     if (spec.bipolar()) return bipolar_message(id, c, spec, e);
@@ -28,6 +29,7 @@ std::string check_skip_reason(CheckId id, const Spec& spec) {
     case Stage::clamp: return clamp_skip_reason(id, spec);
     case Stage::timing: return timing_skip_reason(id, spec);
     case Stage::contact: return "not checked: give the load and the relay's contact ratings to check the contacts";
+    case Stage::board: return "not checked: a board's check (coilfit board)";
     case Stage::driver: break;
     }
     switch (id) {

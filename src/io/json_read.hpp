@@ -28,6 +28,12 @@ struct Origin {
     // from flag_names (every field the command line can set -> its flag).
     bool flags_only = false;
     std::map<std::string, std::string> flag_names;
+    // A document assembled from several places of one file (a board's channel: the board's
+    // sections, its defaults and the channel's own fields): per field path, where the file wrote
+    // it ("coil" -> "channels[2].coil"); a path under a listed one keeps its tail. A path not
+    // listed is named under path_prefix ("channels[2].").
+    std::map<std::string, std::string> written_at;
+    std::string path_prefix;
 };
 
 [[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);

@@ -107,11 +107,7 @@ void check_simulable(const SizingReport& report) {
         throw InputError("--netlist: the design has no clamp, so the collector voltage is limited only by breakdown and "
                          "there is no release to simulate; choose clamp.type diode, diode_zener, diode_tvs or diode_resistor");
     }
-    if (spec.array()) {
-        throw InputError("--netlist: an array channel is not simulated yet; size the same coil with a discrete transistor "
-                         "to check the clamp and the release in a simulator");
-    }
-    if (!report.sized.r_drive_ohm) {
+    if (!spec.array() && !report.sized.r_drive_ohm) {
         throw InputError("--netlist: no " + std::string(report.resistor.kind) + " could be chosen, so there is no circuit to "
                          "simulate; give " + (spec.mosfet() ? "gate_resistor.value" : "base_resistor.value") +
                          " to simulate a resistor of your choice");
@@ -162,7 +158,9 @@ Plan make_plan(const SizingReport& report, const NetlistOptions& options) {
     p.c = &report.sized.conditions;
     p.k = &e.clamp.at[0];
     p.cold_devices = options.device_temperature && spec.bipolar();
-    p.drv = spec.mosfet() ? netlist::mosfet_netlist(report) : netlist::bipolar_netlist(report, p.cold_devices);
+    p.drv = spec.mosfet()  ? netlist::mosfet_netlist(report)
+            : spec.array() ? netlist::array_netlist(report)
+                           : netlist::bipolar_netlist(report, p.cold_devices);
     const Diode& diode = *spec.clamp.diode;
     p.l_h = *spec.coil.inductance_h;
     p.r_cold = e.coil.at[0].r_cold_ohm;
@@ -300,6 +298,8 @@ void write_models_and_analysis(Writer& w, const Plan& p) {
     w.line(fmt::format(".meas tran {} find i(vsense_r) at={}", meas_coil_current, secs(p.t_off)));
     w.line(fmt::format(".meas tran {} max v(c_p) from={} to={}", meas_peak_collector, secs(p.t_off), secs(p.t_stop)));
     w.line(fmt::format(".meas tran {} trig at={} targ i(vsense_r) val={} fall=1", meas_release_time, secs(p.t_off), num(p.i_rel)));
+    // An array channel's on-voltage is not negligible (a Vbe and more): measured for the report's Vce(sat).
+    if (p.spec->array()) w.line(fmt::format(".meas tran {} find v(c_r) at={}", meas_output_on, secs(p.t_off)));
     w.line(".end");
 }
 

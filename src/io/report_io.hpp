@@ -11,6 +11,9 @@ namespace coilfit::io {
 inline constexpr std::string_view report_schema = "coilfit.report/1";
 
 [[nodiscard]] Json report_to_json(const SizingReport& report);
+// One check in the report's shape: id, verdict, value, limit, unit, margin, message, and the
+// reason of a skipped check or the corner of an evaluated one.
+[[nodiscard]] Json check_to_json(const Check& check);
 
 struct TextStyle {
     bool color = false;       // ANSI colours: only on a terminal, never with NO_COLOR
