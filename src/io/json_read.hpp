@@ -43,7 +43,9 @@ struct Origin {
             const auto it = written_at.find(field.substr(0, end));
             if (it != written_at.end()) return it->second + field.substr(end);
         }
-        if (field.empty() && !path_prefix.empty() && path_prefix.back() == '.') return path_prefix.substr(0, path_prefix.size() - 1);
+        if (field.empty() && !path_prefix.empty() && path_prefix.back() == '.') {
+            return path_prefix.substr(0, path_prefix.size() - 1);
+        }
         return path_prefix + field;
     }
 };
