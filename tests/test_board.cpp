@@ -62,8 +62,8 @@ const double pin_pilot_a = (3.465 - (0.6 - 0.002 * 25.0)) / 950.0;
 // highest supply 12.6 V; hot corner 50 °C.
 const double r_cold_ohm = 60.0 * 0.9 * (1 + alpha * (0.0 - 20.0));
 const double r_hot_low_ohm = 60.0 * 0.9 * (1 + alpha * (50.0 - 20.0));
-const double i_cold_a = 12.6 / r_cold_ohm;     // 253 mA
-const double i_hot_a = 12.6 / r_hot_low_ohm;   // 209 mA
+const double i_cold_a = 12.6 / r_cold_ohm;    // 253 mA
+const double i_hot_a = 12.6 / r_hot_low_ohm;  // 209 mA
 // Vce(sat) of the array between its points 200 mA 1.3 V and 350 mA 1.6 V, linear on ln(I).
 double vce_sat(double i) { return 1.3 + 0.3 * std::log(i / 0.2) / std::log(0.35 / 0.2); }
 
@@ -154,7 +154,8 @@ TEST_SUITE("board") {
         CHECK(*power.check.value == Approx(p_hot).epsilon(1e-9));
         CHECK(*power.check.limit == Approx(limit_hot).epsilon(1e-9));
         CHECK(power.set == std::vector<std::size_t>{1, 2, 3});
-        CHECK((3 * vce_sat(i_cold_a) * i_cold_a - 1.7) / 1.7 < (p_hot - limit_hot) / limit_hot);  // cold has more headroom
+        CHECK((3 * vce_sat(i_cold_a) * i_cold_a - 1.7) / 1.7 <
+              (p_hot - limit_hot) / limit_hot);  // cold has more headroom
         // The ground pin carries the sum of the coil currents; the common clamp pin the same sum
         // when they turn off together: 3 x 253 mA against 75 % of 2.5 A.
         const BoardCheck& current = find(r, "array.current", "array U2");
@@ -176,8 +177,8 @@ TEST_SUITE("board") {
     }
 
     TEST_CASE("groups that exclude each other: channels in no group, plus the worst one group") {
-        const BoardReport r = size_board(board_from(R"({ "groups": [ [ "K1 pilot" ], [ "V1-V3" ] ] })"),
-                                         test::shipped_table().catalogue);
+        const BoardReport r =
+            size_board(board_from(R"({ "groups": [ [ "K1 pilot" ], [ "V1-V3" ] ] })"), test::shipped_table().catalogue);
         // Port PA: the pilot alone (3.07 mA) or the three valves (3 x 1.05 mA = 3.15 mA).
         const BoardCheck& pa = find(r, "port.current", "port PA");
         CHECK(*pa.check.value == Approx(3 * pin_array_a).epsilon(1e-9));
@@ -187,7 +188,8 @@ TEST_SUITE("board") {
     }
 
     TEST_CASE("the board's checks agree with a brute force over every allowed set of a small board") {
-        for (const char* rule : {"\"all\"", R"({ "max_on": 1 })", R"({ "max_on": 3 })", R"({ "groups": [ [ "PA0", "PB1" ], [ "V1-V3" ] ] })",
+        for (const char* rule : {"\"all\"", R"({ "max_on": 1 })", R"({ "max_on": 3 })",
+                                 R"({ "groups": [ [ "PA0", "PB1" ], [ "V1-V3" ] ] })",
                                  R"({ "max_on": 2, "groups": [ [ "PA0" ], [ "PA1", "PB0" ] ] })"}) {
             INFO(rule);
             const BoardReport r = size_board(board_from(rule), test::shipped_table().catalogue);
@@ -198,10 +200,12 @@ TEST_SUITE("board") {
             }
             std::vector<double> pins;
             for (const SizingReport& c : r.channels) pins.push_back(*c.find_check("pin.current")->value);
-            CHECK(*find(r, "package.current", "MCU package").check.value == Approx(brute_force(pins, s.max_on, group)).epsilon(1e-12));
+            CHECK(*find(r, "package.current", "MCU package").check.value ==
+                  Approx(brute_force(pins, s.max_on, group)).epsilon(1e-12));
             std::vector<double> pa = pins;
             for (std::size_t i = 4; i < pa.size(); ++i) pa[i] = 0;
-            CHECK(*find(r, "port.current", "port PA").check.value == Approx(brute_force(pa, s.max_on, group)).epsilon(1e-12));
+            CHECK(*find(r, "port.current", "port PA").check.value ==
+                  Approx(brute_force(pa, s.max_on, group)).epsilon(1e-12));
         }
     }
 
@@ -243,7 +247,7 @@ TEST_SUITE("board") {
         CHECK(b.channels[0].spec.coil.resistance_ohm == Approx(400));  // its own coil field
         CHECK(b.channels[1].spec.coil.resistance_ohm == Approx(60));   // the defaults'
         CHECK(b.channels[1].spec.coil.rated_voltage_v == Approx(12));
-        CHECK(b.channels[0].spec.pin.vdd_v == Approx(3.3));            // the mcu's
+        CHECK(b.channels[0].spec.pin.vdd_v == Approx(3.3));  // the mcu's
         CHECK(b.channels[3].pin == "PA3");
         CHECK(b.channels[3].spec.name == "V1-V3 #3");
         CHECK(b.channels[5].pin == "PB1");
@@ -256,10 +260,13 @@ TEST_SUITE("board") {
     TEST_CASE("a bad field is named where the board file wrote it") {
         std::string text = manifold;
         text.replace(text.find(" SIMULTANEOUS"), 13, "");
-        const auto read = [](const std::string& t) { (void)io::read_board(io::parse_board_text(t, "b.json"), test::shipped_table()); };
+        const auto read = [](const std::string& t) {
+            (void)io::read_board(io::parse_board_text(t, "b.json"), test::shipped_table());
+        };
         std::string bad = text;
         bad.replace(bad.find(R"("resistance": "60R")"), 19, R"("resistance": "-6R")");
-        CHECK_THROWS_WITH_AS(read(bad), "b.json: defaults.coil.resistance: expected a resistance greater than zero, got -6 Ω",
+        CHECK_THROWS_WITH_AS(read(bad),
+                             "b.json: defaults.coil.resistance: expected a resistance greater than zero, got -6 Ω",
                              InputError);
         bad = text;
         bad.replace(bad.find(R"("vdd": "3.3V")"), 13, R"("vdd": "-3V")");
@@ -274,7 +281,8 @@ TEST_SUITE("board") {
     TEST_CASE("a channel may override the mcu's pin ratings and give a supply of its own") {
         std::string text = manifold;
         text.replace(text.find(" SIMULTANEOUS"), 13, "");
-        text.replace(text.find(R"("pin": "PA0")"), 12, R"("pin": { "name": "PA0", "max_current": "4mA" }, "supply": { "voltage": "24V" })");
+        text.replace(text.find(R"("pin": "PA0")"), 12,
+                     R"("pin": { "name": "PA0", "max_current": "4mA" }, "supply": { "voltage": "24V" })");
         const Board b = io::read_board(io::parse_board_text(text, "b.json"), test::shipped_table());
         CHECK(b.channels[0].pin == "PA0");
         CHECK(b.channels[0].spec.pin.max_current_a == Approx(0.004));
@@ -291,9 +299,10 @@ TEST_SUITE("board") {
         std::string text = manifold;
         text.replace(text.find(" SIMULTANEOUS"), 13, "");
         text.replace(text.find(R"("name": "V4-V5")"), 15, R"("name": "V1-V3 #2")");
-        CHECK_THROWS_WITH_AS((void)io::read_board(io::parse_board_text(text, "b.json"), test::shipped_table()),
-                             "b.json: channels[2].name: \"V1-V3 #2\" is already the name of a channel of channels[1]; give every "
-                             "channel a name of its own",
-                             InputError);
+        CHECK_THROWS_WITH_AS(
+            (void)io::read_board(io::parse_board_text(text, "b.json"), test::shipped_table()),
+            "b.json: channels[2].name: \"V1-V3 #2\" is already the name of a channel of channels[1]; give every "
+            "channel a name of its own",
+            InputError);
     }
 }

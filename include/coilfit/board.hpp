@@ -31,7 +31,7 @@ namespace coilfit {
 
 // A group of MCU pins sharing one supply pin: their source currents together have a limit.
 struct PortSpec {
-    std::string name;                    // "PA"
+    std::string name;                     // "PA"
     std::optional<double> current_max_a;  // the port's total source limit
 };
 
@@ -86,7 +86,7 @@ struct WorstSet {
 // One check of the board's shared limits: a check of the usual shape, what it is about and the
 // set of channels it was taken at.
 struct BoardCheck {
-    std::string subject;           // "port PA", "MCU package", "supply", "array U3"
+    std::string subject;  // "port PA", "MCU package", "supply", "array U3"
     Check check;
     std::vector<std::size_t> set;  // the channels on in the worst allowed set (those that count)
 };
@@ -96,7 +96,7 @@ struct BoardReport {
     std::vector<SizingReport> channels;  // one full report per channel, in board order
     std::vector<BoardCheck> checks;
     std::vector<QuantityEntry> quantities;  // the board's sums
-    Verdict verdict = Verdict::fail;  // fail when any channel or any board check fails
+    Verdict verdict = Verdict::fail;        // fail when any channel or any board check fails
     bool has_warnings = false;
     std::vector<std::string> notes;
     std::vector<std::string> cautions;  // every channel's cautions, each once

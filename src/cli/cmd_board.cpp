@@ -19,7 +19,8 @@ const BoardChannel& find_channel(const Board& board, const std::string& name, co
     for (const BoardChannel& ch : board.channels) {
         if (ch.repeat == 0) names += (names.empty() ? "" : ", ") + ch.entry_name;
     }
-    throw InputError("--channel: no channel or pin named \"" + name + "\" on " + file + " (its channels: " + names + ")");
+    throw InputError("--channel: no channel or pin named \"" + name + "\" on " + file + " (its channels: " + names +
+                     ")");
 }
 
 int exit_code(Verdict verdict, bool warnings, bool strict) {
@@ -36,7 +37,8 @@ CLI::App* setup_board(CLI::App& app, BoardOptions& options) {
     add_common_options(*cmd, options.common, true);
     cmd->add_flag("--brief", options.brief, "the channel lines, the checks that fail or warn, and the verdict");
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
-    cmd->add_option("--channel", options.channel, "print one channel's full report (its name, its pin, or an entry's name)");
+    cmd->add_option("--channel", options.channel,
+                    "print one channel's full report (its name, its pin, or an entry's name)");
     return cmd;
 }
 

@@ -82,7 +82,9 @@ std::vector<BoardCheck> mcu_checks(const board::Context& ctx) {
             used = true;
         }
         // A port without channels has nothing to check.
-        if (used) out.push_back(sum_check(ctx, CheckId::port_current, "port " + board.mcu.ports[p].name, w, board.mcu.ports[p].current_max_a));
+        if (used)
+            out.push_back(sum_check(ctx, CheckId::port_current, "port " + board.mcu.ports[p].name, w,
+                                    board.mcu.ports[p].current_max_a));
     }
     std::vector<double> pins(n);
     for (std::size_t i = 0; i < n; ++i) pins[i] = ctx.loads[i].pin_a;
@@ -167,13 +169,13 @@ std::vector<board::Package> packages_of(const Board& board) {
 }  // namespace
 
 std::size_t BoardReport::failed_channels() const {
-    return static_cast<std::size_t>(
-        std::count_if(channels.begin(), channels.end(), [](const SizingReport& r) { return r.verdict == Verdict::fail; }));
+    return static_cast<std::size_t>(std::count_if(channels.begin(), channels.end(),
+                                                  [](const SizingReport& r) { return r.verdict == Verdict::fail; }));
 }
 
 std::size_t BoardReport::failed_board_checks() const {
-    return static_cast<std::size_t>(
-        std::count_if(checks.begin(), checks.end(), [](const BoardCheck& c) { return c.check.verdict == Verdict::fail; }));
+    return static_cast<std::size_t>(std::count_if(
+        checks.begin(), checks.end(), [](const BoardCheck& c) { return c.check.verdict == Verdict::fail; }));
 }
 
 BoardReport size_board(const Board& board, const Catalogue& catalogue) {
@@ -202,7 +204,8 @@ BoardReport size_board(const Board& board, const Catalogue& catalogue) {
     r.notes = board::notes(ctx);
     for (const SizingReport& c : r.channels) {
         for (const std::string& caution : c.cautions) {
-            if (std::find(r.cautions.begin(), r.cautions.end(), caution) == r.cautions.end()) r.cautions.push_back(caution);
+            if (std::find(r.cautions.begin(), r.cautions.end(), caution) == r.cautions.end())
+                r.cautions.push_back(caution);
         }
     }
     return r;

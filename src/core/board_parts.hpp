@@ -12,9 +12,9 @@ namespace coilfit::board {
 
 // What one channel adds to the board's sums while it is on.
 struct Load {
-    double pin_a = 0;   // its highest pin current
-    double coil_a = 0;  // its highest coil current
-    std::array<double, corner_count> power_w{};      // the switch's dissipation at each ambient corner
+    double pin_a = 0;                               // its highest pin current
+    double coil_a = 0;                              // its highest coil current
+    std::array<double, corner_count> power_w{};     // the switch's dissipation at each ambient corner
     std::array<bool, corner_count> power_beyond{};  // Vce(sat) there came from beyond the part's data
 };
 
@@ -38,8 +38,8 @@ struct Context {
 [[nodiscard]] std::string message(const Context& ctx, CheckId id, const std::string& subject, const CheckValue& c,
                                   const WorstSet& set, const std::vector<double>& weights);
 [[nodiscard]] std::string skip_reason(const Context& ctx, CheckId id, const std::string& subject, const WorstSet& set);
-[[nodiscard]] std::string array_power_message(const Context& ctx, const Package& pkg, const CheckValue& c, const WorstSet& set,
-                                              double ambient_c);
+[[nodiscard]] std::string array_power_message(const Context& ctx, const Package& pkg, const CheckValue& c,
+                                              const WorstSet& set, double ambient_c);
 [[nodiscard]] std::vector<QuantityEntry> quantities(const Context& ctx);
 [[nodiscard]] std::vector<std::string> notes(const Context& ctx);
 

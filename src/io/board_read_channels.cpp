@@ -21,11 +21,13 @@ std::vector<std::string> pins_of(ObjectReader& r, const Json& pin, std::size_t c
     std::vector<std::string> out;
     if (pin.is_array()) {
         if (pin.size() != count) {
-            r.fail_at("pin", fmt::format("expected {} pin name{} (count {}), got {}", count, count == 1 ? "" : "s", count, pin.size()));
+            r.fail_at("pin", fmt::format("expected {} pin name{} (count {}), got {}", count, count == 1 ? "" : "s",
+                                         count, pin.size()));
         }
         for (std::size_t k = 0; k < pin.size(); ++k) {
             if (!pin[k].is_string() || pin[k].get<std::string>().empty()) {
-                r.fail_at("pin[" + std::to_string(k) + "]", "expected a pin name such as \"PA0\", got " + describe(pin[k]));
+                r.fail_at("pin[" + std::to_string(k) + "]",
+                          "expected a pin name such as \"PA0\", got " + describe(pin[k]));
             }
             out.push_back(pin[k].get<std::string>());
         }
@@ -34,9 +36,12 @@ std::vector<std::string> pins_of(ObjectReader& r, const Json& pin, std::size_t c
     const std::string name = pin.get<std::string>();
     if (count == 1) return {name};
     std::size_t digits = 0;
-    while (digits < name.size() && digits < 6 && std::isdigit(static_cast<unsigned char>(name[name.size() - 1 - digits])) != 0) ++digits;
+    while (digits < name.size() && digits < 6 &&
+           std::isdigit(static_cast<unsigned char>(name[name.size() - 1 - digits])) != 0)
+        ++digits;
     if (digits == 0) {
-        r.fail_at("pin", fmt::format("{} has no number to count {} pins on from; give a list of {} pin names", in_quotes(name), count, count));
+        r.fail_at("pin", fmt::format("{} has no number to count {} pins on from; give a list of {} pin names",
+                                     in_quotes(name), count, count));
     }
     const std::string stem = name.substr(0, name.size() - digits);
     const std::size_t first = std::stoul(name.substr(name.size() - digits));
@@ -51,10 +56,12 @@ std::vector<std::string> pins_of(ObjectReader& r, const Json& pin, std::size_t c
 // The pin field: a name, a list of names, or an object { "name": ..., pin ratings that override the mcu's }.
 Json pin_field(ObjectReader& r, Json& overrides) {
     const Json* pin = r.get("pin");
-    if (!pin) r.fail_at("pin", "missing; expected the MCU pin's name, such as \"PA0\" (every channel has a pin of its own)");
+    if (!pin)
+        r.fail_at("pin", "missing; expected the MCU pin's name, such as \"PA0\" (every channel has a pin of its own)");
     if (pin->is_object()) {
         if (!pin->contains("name") || !pin->at("name").is_string()) {
-            r.fail_at("pin.name", "missing; expected the MCU pin's name, such as \"PA0\", beside the pin's own ratings");
+            r.fail_at("pin.name",
+                      "missing; expected the MCU pin's name, such as \"PA0\", beside the pin's own ratings");
         }
         overrides = *pin;
         overrides.erase("name");
@@ -95,17 +102,19 @@ std::optional<std::size_t> port_field(ObjectReader& r, const Board& board) {
 }
 
 // One entry of `channels`: its board fields, and its spec read from the assembled document.
-Entry read_entry(const Json& ch, const std::string& at, const BoardDocument& d, const PartsTable& table, const Base& base,
-                 const Json* defaults, const Board& board) {
-    if (!ch.is_object()) fail(d.origin, at, "expected a channel such as { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... }, got " + describe(ch));
+Entry read_entry(const Json& ch, const std::string& at, const BoardDocument& d, const PartsTable& table,
+                 const Base& base, const Json* defaults, const Board& board) {
+    if (!ch.is_object())
+        fail(d.origin, at,
+             "expected a channel such as { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... }, got " + describe(ch));
     ObjectReader r(ch, d.origin, at);
     Entry e;
     std::size_t count = 1;
     if (r.has("count")) {
         const double v = *r.quantity("count", Unit::number);
         if (v != std::floor(v) || v < 1 || v > static_cast<double>(max_board_channels)) {
-            r.fail_at("count", fmt::format("expected a whole number of channels from 1 to {}, got {}", max_board_channels,
-                                           format_quantity(v, Unit::number, 6)));
+            r.fail_at("count", fmt::format("expected a whole number of channels from 1 to {}, got {}",
+                                           max_board_channels, format_quantity(v, Unit::number, 6)));
         }
         count = static_cast<std::size_t>(v);
     }
@@ -129,7 +138,9 @@ Entry read_entry(const Json& ch, const std::string& at, const BoardDocument& d, 
         const Json& transistor = own.contains("transistor") ? own["transistor"] : fill.value("transistor", Json());
         if (names_array(transistor, table) && !own.contains("clamp")) fill.erase("clamp");
         for (const char* key : {"schema", "name"}) {
-            if (fill.contains(key)) fail(d.origin, std::string("defaults.") + key, "not a default: every channel has its own; give it in the channel");
+            if (fill.contains(key))
+                fail(d.origin, std::string("defaults.") + key,
+                     "not a default: every channel has its own; give it in the channel");
         }
         overlay(doc.doc, fill, "", "defaults", doc.origin.written_at);
     }
@@ -142,7 +153,8 @@ Entry read_entry(const Json& ch, const std::string& at, const BoardDocument& d, 
     if (const auto package = r.text("package", 40)) {
         if (!e.spec.array()) {
             r.fail_at("package", "only a transistor-array channel has a package; this channel's transistor is " +
-                                     std::string(transistor_kind_name(e.spec.transistor)) + " " + origin(e.spec.transistor).id);
+                                     std::string(transistor_kind_name(e.spec.transistor)) + " " +
+                                     origin(e.spec.transistor).id);
         }
         e.package = *package;
     } else if (e.spec.array()) {
@@ -161,27 +173,34 @@ void check_packages(const Board& board, const BoardDocument& d, const std::vecto
         const BoardChannel& first = board.channels[it->second.first];
         const ArrayPart& part = *first.spec.array();
         if (origin(ch.spec.transistor).id != part.id) {
-            fail(d.origin, places[i] + ".package", fmt::format("{} is an {} (channel {}); this channel's transistor is {}", ch.package,
-                                                              part.id, first.spec.name, origin(ch.spec.transistor).id));
+            fail(d.origin, places[i] + ".package",
+                 fmt::format("{} is an {} (channel {}); this channel's transistor is {}", ch.package, part.id,
+                             first.spec.name, origin(ch.spec.transistor).id));
         }
         if (++it->second.second > static_cast<std::size_t>(part.channels)) {
-            fail(d.origin, places[i] + ".package", fmt::format("{} would carry {} channels, but {} has {}; name another package for the rest",
-                                                              ch.package, it->second.second, part.id, part.channels));
+            fail(d.origin, places[i] + ".package",
+                 fmt::format("{} would carry {} channels, but {} has {}; name another package for the rest", ch.package,
+                             it->second.second, part.id, part.channels));
         }
     }
 }
 
 }  // namespace
 
-void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& table, const Base& base, const Json* defaults,
-                   Board& board) {
+void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& table, const Base& base,
+                   const Json* defaults, Board& board) {
     const Json* list = top.get("channels");
-    if (!list) top.fail_at("channels", "missing; expected a list of channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... } ]");
+    if (!list)
+        top.fail_at(
+            "channels",
+            "missing; expected a list of channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... } ]");
     if (!list->is_array() || list->empty()) {
-        top.fail_at("channels", "expected a list of one or more channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... } ], got " +
-                                    (list->is_array() ? std::string("an empty list") : describe(*list)));
+        top.fail_at("channels",
+                    "expected a list of one or more channels such as [ { \"name\": \"K1 pump\", \"pin\": \"PA0\", ... "
+                    "} ], got " +
+                        (list->is_array() ? std::string("an empty list") : describe(*list)));
     }
-    std::map<std::string, std::size_t> pin_owner;  // pin -> channel
+    std::map<std::string, std::size_t> pin_owner;   // pin -> channel
     std::map<std::string, std::size_t> name_owner;  // a channel's or an entry's name -> entry
     std::vector<std::string> places;                // channel -> its entry's place in the file
     for (std::size_t k = 0; k < list->size(); ++k) {
@@ -189,15 +208,19 @@ void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& 
         Entry e = read_entry((*list)[k], at, d, table, base, defaults, board);
         // Names pick channels (--channel, simultaneous.groups): each names one entry.
         std::vector<std::string> names{e.name};
-        for (std::size_t r = 0; e.pins.size() > 1 && r < e.pins.size(); ++r) names.push_back(e.name + " #" + std::to_string(r + 1));
+        for (std::size_t r = 0; e.pins.size() > 1 && r < e.pins.size(); ++r)
+            names.push_back(e.name + " #" + std::to_string(r + 1));
         for (const std::string& name : names) {
             if (const auto [it, added] = name_owner.emplace(name, k); !added && it->second != k) {
-                fail(d.origin, at + ".name", fmt::format("{} is already the name of a channel of channels[{}]; give every channel a name of its own",
-                                                         in_quotes(name), it->second));
+                fail(d.origin, at + ".name",
+                     fmt::format(
+                         "{} is already the name of a channel of channels[{}]; give every channel a name of its own",
+                         in_quotes(name), it->second));
             }
         }
         if (board.channels.size() + e.pins.size() > max_board_channels) {
-            fail(d.origin, at + ".count", fmt::format("the board would have more than {} channels", max_board_channels));
+            fail(d.origin, at + ".count",
+                 fmt::format("the board would have more than {} channels", max_board_channels));
         }
         for (std::size_t r = 0; r < e.pins.size(); ++r) {
             BoardChannel ch;
@@ -213,8 +236,11 @@ void read_channels(ObjectReader& top, const BoardDocument& d, const PartsTable& 
             ch.board_supply = !e.own_supply;
             if (const auto [it, added] = pin_owner.emplace(ch.pin, board.channels.size()); !added) {
                 const BoardChannel& other = board.channels[it->second];
-                const std::string field = (*list)[k].at("pin").is_array() ? at + ".pin[" + std::to_string(r) + "]" : at + ".pin";
-                fail(d.origin, field, fmt::format("{} is already the pin of {} ({})", in_quotes(ch.pin), other.spec.name, places[it->second]));
+                const std::string field =
+                    (*list)[k].at("pin").is_array() ? at + ".pin[" + std::to_string(r) + "]" : at + ".pin";
+                fail(d.origin, field,
+                     fmt::format("{} is already the pin of {} ({})", in_quotes(ch.pin), other.spec.name,
+                                 places[it->second]));
             }
             board.channels.push_back(std::move(ch));
             places.push_back(at);

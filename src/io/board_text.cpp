@@ -18,10 +18,14 @@ std::string margin_text(const std::optional<double>& m) {
 
 std::string verdict_word(Verdict v) {
     switch (v) {
-    case Verdict::pass: return "pass";
-    case Verdict::warn: return "WARN";
-    case Verdict::fail: return "FAIL";
-    case Verdict::skip: return "-";
+        case Verdict::pass:
+            return "pass";
+        case Verdict::warn:
+            return "WARN";
+        case Verdict::fail:
+            return "FAIL";
+        case Verdict::skip:
+            return "-";
     }
     return "";
 }
@@ -42,7 +46,9 @@ struct Table {
             std::string line;
             for (std::size_t c = 0; c < rows[i].size(); ++c) {
                 const bool last = c + 1 == rows[i].size();
-                std::string cell = right[c] ? pad_left(rows[i][c], w[c]) : last ? rows[i][c] : pad_right(rows[i][c], w[c]);
+                std::string cell = right[c] ? pad_left(rows[i][c], w[c])
+                                   : last   ? rows[i][c]
+                                            : pad_right(rows[i][c], w[c]);
                 if (c == verdict_column && i > 0) cell = paint(cell, verdicts[i - 1], style);
                 line += "  " + cell;
             }
@@ -78,8 +84,8 @@ std::string channel_table(const BoardReport& report, const TextStyle& style) {
         const Check* w = shown_check(r);
         std::string driver = origin(ch.spec.transistor).id;
         if (!ch.package.empty()) driver += " (" + ch.package + ")";
-        t.rows.push_back({ch.spec.name, ch.pin, driver, resistor_cell(r), w ? w->id : "-", w ? margin_text(w->margin) : "",
-                          verdict_word(r.verdict)});
+        t.rows.push_back({ch.spec.name, ch.pin, driver, resistor_cell(r), w ? w->id : "-",
+                          w ? margin_text(w->margin) : "", verdict_word(r.verdict)});
         t.verdicts.push_back(r.verdict == Verdict::pass && r.has_warnings ? Verdict::warn : r.verdict);
     }
     return t.render(style, 6);
@@ -114,16 +120,19 @@ std::string details(const BoardReport& report, const TextStyle& style) {
         const Check& c = b.check;
         if (c.verdict != Verdict::fail && c.verdict != Verdict::warn) continue;
         const std::string label = c.id + " (" + b.subject + ")";
-        out += "  " + paint(label, c.verdict, style) + "  " + wrap(c.message, style.width, display_width(label) + 4) + "\n";
+        out += "  " + paint(label, c.verdict, style) + "  " + wrap(c.message, style.width, display_width(label) + 4) +
+               "\n";
     }
     for (std::size_t i = 0; i < report.channels.size(); ++i) {
         const BoardChannel& ch = report.board.channels[i];
         if (ch.repeat > 0) continue;
-        const std::string who = ch.repeats > 1 ? ch.entry_name + " (each of " + std::to_string(ch.repeats) + ")" : ch.spec.name;
+        const std::string who =
+            ch.repeats > 1 ? ch.entry_name + " (each of " + std::to_string(ch.repeats) + ")" : ch.spec.name;
         for (const Check& c : report.channels[i].checks) {
             if (c.verdict != Verdict::fail && c.verdict != Verdict::warn) continue;
             const std::string label = who + ": " + c.id;
-            out += "  " + paint(label, c.verdict, style) + "  " + wrap(c.message, style.width, display_width(label) + 4) + "\n";
+            out += "  " + paint(label, c.verdict, style) + "  " +
+                   wrap(c.message, style.width, display_width(label) + 4) + "\n";
         }
     }
     return out;
@@ -137,7 +146,8 @@ std::string result_line(const BoardReport& report, const TextStyle& style) {
     }
     if (report.verdict == Verdict::pass) {
         return paint("Result: PASS", warns ? Verdict::warn : Verdict::pass, style) +
-               (warns ? fmt::format(" with {} warning{}: every channel and every board check holds at worst case; read the warnings.\n",
+               (warns ? fmt::format(" with {} warning{}: every channel and every board check holds at worst case; read "
+                                    "the warnings.\n",
                                     warns, warns == 1 ? "" : "s")
                       : std::string(": every channel and every board check holds at worst case.\n"));
     }
@@ -149,14 +159,18 @@ std::string result_line(const BoardReport& report, const TextStyle& style) {
     for (std::size_t i = 0; i < report.channels.size(); ++i) {
         if (report.channels[i].verdict == Verdict::fail) channels.push_back(i);
     }
-    if (channels.size() == 1) failed.push_back(report.board.channels[channels.front()].spec.name);
-    else if (!channels.empty()) failed.push_back(set_words(report.board, channels));
+    if (channels.size() == 1)
+        failed.push_back(report.board.channels[channels.front()].spec.name);
+    else if (!channels.empty())
+        failed.push_back(set_words(report.board, channels));
     std::string list;
     for (std::size_t k = 0; k < failed.size(); ++k) list += (k ? "; " : "") + failed[k];
     const std::size_t boards = report.failed_board_checks();
     std::string what;
     if (boards) what = fmt::format("{} board check{} failed", boards, boards == 1 ? "" : "s");
-    if (!channels.empty()) what += fmt::format("{}{} channel{} failed", boards ? ", " : "", channels.size(), channels.size() == 1 ? "" : "s");
+    if (!channels.empty())
+        what +=
+            fmt::format("{}{} channel{} failed", boards ? ", " : "", channels.size(), channels.size() == 1 ? "" : "s");
     if (boards && channels.empty()) what += " (every channel passes on its own)";
     const std::string head = "Result: FAIL";
     return paint(head, Verdict::fail, style) + wrap(": " + what + ": " + list + ".", style.width, head.size()) + "\n";
@@ -166,10 +180,12 @@ std::string result_line(const BoardReport& report, const TextStyle& style) {
 
 std::string render_board_text(const BoardReport& report, const TextStyle& style, bool brief) {
     const Board& board = report.board;
-    std::string out = fmt::format("coilfit {} - board: {}\n\n", COILFIT_VERSION, board.name.empty() ? std::string("unnamed board") : board.name);
+    std::string out = fmt::format("coilfit {} - board: {}\n\n", COILFIT_VERSION,
+                                  board.name.empty() ? std::string("unnamed board") : board.name);
     out += fmt::format("Channels ({}, each sized and checked on its own)\n", report.channels.size());
     out += channel_table(report, style) + "\n";
-    out += brief ? "Board checks that fail or warn\n" : "Board checks (each at the allowed set of channels on at once that is worst for it)\n";
+    out += brief ? "Board checks that fail or warn\n"
+                 : "Board checks (each at the allowed set of channels on at once that is worst for it)\n";
     out += board_check_table(report, style, brief) + "\n";
     if (!brief) {
         const std::string found = details(report, style);
@@ -177,9 +193,11 @@ std::string render_board_text(const BoardReport& report, const TextStyle& style,
         out += "Notes\n";
         for (const auto& n : report.notes) out += "  - " + wrap(n, style.width, 4) + "\n";
         for (const BoardCheck& b : report.checks) {
-            if (b.check.verdict == Verdict::skip) out += "  - " + wrap(b.check.id + " (" + b.subject + "): " + b.check.reason, style.width, 4) + "\n";
+            if (b.check.verdict == Verdict::skip)
+                out += "  - " + wrap(b.check.id + " (" + b.subject + "): " + b.check.reason, style.width, 4) + "\n";
         }
-        out += "  - " + wrap("`coilfit board BOARD --channel NAME` prints a channel's full report", style.width, 4) + "\n\n";
+        out += "  - " + wrap("`coilfit board BOARD --channel NAME` prints a channel's full report", style.width, 4) +
+               "\n\n";
     }
     out += "Cautions\n";
     for (const auto& c : report.cautions) out += "  ! " + wrap(c, style.width, 4) + "\n";

@@ -14,29 +14,10 @@
 
 namespace coilfit::io {
 
-namespace {
-
-// Where the file wrote a field of an assembled document (Origin::written_at): the longest listed
-// path that is the field or holds it, with the rest of the field's path kept.
-std::string file_path(const Origin& origin, const std::string& path) {
-    if (origin.written_at.empty() && origin.path_prefix.empty()) return path;
-    for (std::size_t end = path.size(); end > 0; --end) {
-        if (end < path.size() && path[end] != '.' && path[end] != '[') continue;
-        const auto it = origin.written_at.find(path.substr(0, end));
-        if (it != origin.written_at.end()) return it->second + path.substr(end);
-    }
-    if (path.empty() && !origin.path_prefix.empty() && origin.path_prefix.back() == '.') {
-        return origin.path_prefix.substr(0, origin.path_prefix.size() - 1);
-    }
-    return origin.path_prefix + path;
-}
-
-}  // namespace
-
 void fail(const Origin& origin, const std::string& field, const std::string& what) {
     const auto flag = origin.flags.find(field);
     if (flag != origin.flags.end()) throw InputError(flag->second + ": " + what);
-    const std::string path = file_path(origin, field);
+    const std::string path = origin.file_path(field);
     std::string msg = origin.file;
     if (!path.empty()) msg += (msg.empty() ? "" : ": ") + path;
     if (origin.flags_only && what.rfind("missing", 0) == 0) {

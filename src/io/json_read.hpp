@@ -34,6 +34,21 @@ struct Origin {
     // listed is named under path_prefix ("channels[2].").
     std::map<std::string, std::string> written_at;
     std::string path_prefix;
+
+    // Where the file wrote a field: the longest listed path that is the field or holds it, with
+    // the rest of the field's path kept; else the field under path_prefix.
+    [[nodiscard]] std::string file_path(const std::string& field) const {
+        if (written_at.empty() && path_prefix.empty()) return field;
+        for (std::size_t end = field.size(); end > 0; --end) {
+            if (end < field.size() && field[end] != '.' && field[end] != '[') continue;
+            const auto it = written_at.find(field.substr(0, end));
+            if (it != written_at.end()) return it->second + field.substr(end);
+        }
+        if (field.empty() && !path_prefix.empty() && path_prefix.back() == '.') {
+            return path_prefix.substr(0, path_prefix.size() - 1);
+        }
+        return path_prefix + field;
+    }
 };
 
 [[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);
