@@ -300,7 +300,10 @@ TEST_SUITE("sizing") {
 
     TEST_CASE("the report lists the defaults-independent notes and the cautions") {
         Spec s = hand_spec();
-        s.load = LoadSpec{230.0, LoadKind::ac, 2.0};
+        s.load = LoadSpec{};
+        s.load->voltage_v = 230.0;
+        s.load->kind = LoadKind::ac;
+        s.load->current_a = 2.0;
         const SizingReport r = size(s, Catalogue{});
         bool mains = false;
         for (const auto& c : r.cautions) mains = mains || c.find("local electrical codes and licensed practice") != std::string::npos;

@@ -2,8 +2,10 @@
 
 #include "cli/commands.hpp"
 #include "coilfit/pick.hpp"
+#include "coilfit/pick_relays.hpp"
 #include "io/format.hpp"
 #include "io/report_io.hpp"
+#include "io/report_pick_relays.hpp"
 
 namespace coilfit::cli {
 
@@ -20,7 +22,9 @@ int run_pick(const PickOptions& options) {
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
     const PickResult result = pick(spec, table.catalogue);
     const std::size_t n = options.top == 0 ? result.candidates.size() : std::min(options.top, result.candidates.size());
-    const bool any_pass = !result.candidates.empty() && result.candidates.front().verdict == Verdict::pass;
+    // A load and no relay: the relays of the table too (src/core/pick_relays.cpp).
+    const RelayPickResult relays = pick_relays(spec, table.catalogue, table.relay_records());
+    const bool any_pass = (!result.candidates.empty() && result.candidates.front().verdict == Verdict::pass) || !relays.passing.empty();
 
     std::string text;
     if (options.common.format == "json") {
@@ -46,6 +50,7 @@ int run_pick(const PickOptions& options) {
         }
         j["candidates"] = list;
         j["reasons"] = result.reasons;
+        if (picks_relays(spec)) j["relays"] = io::relay_pick_to_json(relays);
         text = j.dump(2) + "\n";
     } else {
         io::TextStyle style;
@@ -83,6 +88,7 @@ int run_pick(const PickOptions& options) {
         }
         text += "\nRanked by the smallest margin over all checks; size one with `coilfit size SPEC --transistor ID --diode ID`.\n"
                 "Values are typical datasheet limits from memory; confirm against the datasheets in use.\n";
+        if (picks_relays(spec)) text += io::render_relay_pick_text(relays, 3, text_width());
     }
     emit(text, options.common.output);
     return any_pass ? exit_pass : exit_fail;

@@ -1,6 +1,7 @@
 #include <fmt/format.h>
 
 #include "io/format.hpp"
+#include "io/report_contact_io.hpp"
 #include "io/report_io.hpp"
 
 namespace coilfit::io {
@@ -200,6 +201,7 @@ std::string render_text(const SizingReport& report, const TextStyle& style) {
         }
         out += "  (> marks the clamp of this spec)\n\n";
     }
+    out += render_contact_text(report, style);
 
     if (!report.notes.empty()) {
         out += heading("Notes");

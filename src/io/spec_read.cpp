@@ -185,7 +185,19 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
         (void)top.get("ambient");
         s.defaults_used.push_back(fmt::format("ambient {:g} °C to {:g} °C", s.ambient.min_c, s.ambient.max_c));
     }
-    if (const Json* j = section(top, d, "coil", true)) {
+    if (auto relay = spec_parts::read_relay_field(top, table)) {
+        // The relay's coil fields, then the spec's `coil` fields beside it win.
+        Json merged = relay->coil_fields;
+        if (const Json* j = top.get("coil")) {
+            if (!j->is_object()) fail(d.origin, "coil", "expected an object of coil fields beside relay, got " + describe(*j));
+            if (j->contains("preset")) fail(d.origin, "coil.preset", "given with relay; the relay's record fills the coil");
+            for (const auto& [k, v] : j->items()) merged[k] = v;
+        }
+        ObjectReader r(merged, d.origin, "coil");
+        read_coil(r, s.coil, s.defaults_used);
+        r.finish();
+        s.relay = static_cast<const RelayPart&>(relay->record);
+    } else if (const Json* j = section(top, d, "coil", true)) {
         const Json merged = with_preset(*j, "coil", table, d.origin, "coil");
         ObjectReader r(merged, d.origin, "coil");
         read_coil(r, s.coil, s.defaults_used);
