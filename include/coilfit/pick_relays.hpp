@@ -30,8 +30,9 @@ struct RelayPickResult {
 // Whether pick tries the relays for this spec: a load and no relay.
 [[nodiscard]] bool picks_relays(const Spec& spec);
 
-// The spec with a relay record's coil and contacts in place of its own coil (the spec's
-// max_release_time, a requirement of the application, stays where the record gives none).
+// The spec with a relay record's coil and contacts in place of its own coil; the spec's
+// max_release_time (the application's requirement) and self_heating (often measured in place)
+// stay where the record gives none, as with `--relay` on a spec file.
 [[nodiscard]] Spec with_relay(const Spec& spec, const RelayRecord& relay);
 
 [[nodiscard]] RelayPickResult pick_relays(const Spec& spec, const Catalogue& catalogue, const std::vector<RelayRecord>& relays);

@@ -26,6 +26,7 @@ Spec with_relay(const Spec& spec, const RelayRecord& relay) {
     s.coil = relay.coil;
     s.coil.preset.clear();
     if (!s.coil.max_release_time_s) s.coil.max_release_time_s = spec.coil.max_release_time_s;
+    if (!s.coil.self_heating_k && !s.coil.thermal_resistance_k_per_w) s.coil.self_heating_k = spec.coil.self_heating_k;
     s.relay = static_cast<const RelayPart&>(relay);
     return s;
 }

@@ -143,10 +143,24 @@ void prune_clamp_fields(SpecDocument& d, const std::string& type) {
     for (const auto& key : drop) clamp->erase(key);
 }
 
+// A relay given by flag replaces the file's coil: the fields that describe the coil itself go
+// (a flag of this run that set one stays); the application's own (self_heating,
+// max_release_time) stay beside the relay.
+void prune_coil_fields(SpecDocument& d) {
+    Json* coil = d.doc.contains("coil") && d.doc["coil"].is_object() ? &d.doc["coil"] : nullptr;
+    if (!coil) return;
+    std::vector<std::string> drop;
+    for (const auto& [key, value] : coil->items()) {
+        if (key != "self_heating" && key != "max_release_time" && d.origin.flags.count("coil." + key) == 0) drop.push_back(key);
+    }
+    for (const auto& key : drop) coil->erase(key);
+}
+
 }  // namespace
 
 void set_field(SpecDocument& d, const std::string& dotted_path, Json value, const std::string& flag) {
     if (dotted_path == "clamp.type" && value.is_string()) prune_clamp_fields(d, value.get<std::string>());
+    if (dotted_path == "relay") prune_coil_fields(d);
     Json* node = &d.doc;
     std::size_t start = 0;
     std::string path;
