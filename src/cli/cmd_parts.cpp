@@ -1,6 +1,7 @@
 #include <fmt/format.h>
 
 #include "cli/commands.hpp"
+#include "cli/parts_relays.hpp"
 #include "io/format.hpp"
 
 namespace coilfit::cli {
@@ -35,7 +36,7 @@ bool diode_kind_matches(const Diode& d, const std::string& kind) {
 CLI::App* setup_parts(CLI::App& app, PartsOptions& options) {
     CLI::App* cmd = app.add_subcommand("parts", "list the parts table, or show one part");
     cmd->add_option("kind", options.kind,
-                    "npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil or pin; or a part id");
+                    "npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor; or a part id");
     cmd->add_option("id", options.id, "a part id to show in full");
     add_common_options(*cmd, options.common, false);
     return cmd;
@@ -45,11 +46,11 @@ int run_parts(const PartsOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Catalogue& cat = table.catalogue;
     static const std::vector<std::string> kinds{"npn", "darlington", "nmos", "array", "transistor", "diode", "rectifier",
-                                                "fast", "signal", "schottky", "zener", "tvs", "coil", "pin"};
+                                                "fast", "signal", "schottky", "zener", "tvs", "coil", "pin", "relay", "contactor"};
     std::string kind = options.kind;
     std::string id = options.id;
     if (!kind.empty() && std::find(kinds.begin(), kinds.end(), kind) == kinds.end()) {
-        if (!id.empty()) throw InputError("parts: unknown kind \"" + kind + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin");
+        if (!id.empty()) throw InputError("parts: unknown kind \"" + kind + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay, contactor");
         id = kind;  // `coilfit parts 2N4401`
         kind.clear();
     }
@@ -113,7 +114,7 @@ int run_parts(const PartsOptions& options) {
     for (const auto& d : cat.diodes) {
         if (!(kind.empty() || diode_kind_matches(d, kind)) || (!id.empty() && d.id != id)) continue;
         if (kind == "npn" || kind == "darlington" || kind == "nmos" || kind == "array" || kind == "transistor" || kind == "zener" ||
-            kind == "tvs" || kind == "coil" || kind == "pin") {
+            kind == "tvs" || kind == "coil" || kind == "pin" || kind == "relay" || kind == "contactor") {
             continue;
         }
         ++found;
@@ -138,6 +139,9 @@ int run_parts(const PartsOptions& options) {
         pre.push_back(pj);
         pre_rows.push_back({p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")});
     }
+    io::Json rel = io::Json::array();
+    std::vector<std::vector<std::string>> rel_rows;
+    if (kind.empty() || kind == "relay" || kind == "contactor") found += list_relays(table, kind, id, rel, rel_rows);
     if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + id + "\" in the table");
 
     if (options.common.format == "json") {
@@ -148,13 +152,14 @@ int run_parts(const PartsOptions& options) {
         out["zeners"] = zen;
         out["tvs"] = tvs;
         out["presets"] = pre;
+        out["relays"] = rel;
         emit(out.dump(2) + "\n", "");
         return exit_pass;
     }
     std::string text;
     if (!id.empty()) {
         // One part in full: its record as JSON is the clearest full view.
-        for (const auto* list : {&bip, &mos, &arr, &dio, &zen, &tvs, &pre}) {
+        for (const auto* list : {&bip, &mos, &arr, &dio, &zen, &tvs, &pre, &rel}) {
             for (const auto& r : *list) text += r.dump(2) + "\n";
         }
         emit(text, "");
@@ -167,6 +172,7 @@ int run_parts(const PartsOptions& options) {
     if (zen_rows.size() > 1) text += fmt::format("Zeners ({})\n", zen_rows.size() - 1) + table_text(zen_rows) + "\n";
     if (tvs_rows.size() > 1) text += fmt::format("TVS ({})\n", tvs_rows.size() - 1) + table_text(tvs_rows) + "\n";
     if (pre_rows.size() > 1) text += fmt::format("Presets ({})\n", pre_rows.size() - 1) + table_text(pre_rows) + "\n";
+    if (rel_rows.size() > 1) text += fmt::format("Relays and contactors ({})\n", rel_rows.size() - 1) + table_text(rel_rows) + "\n";
     text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n";
     text += "Read from: ";
     for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + table.files[i];
