@@ -13,6 +13,7 @@
 #include "coilfit/quantity.hpp"
 #include "coilfit/sizing.hpp"
 #include "coilfit/spec.hpp"
+#include "coilfit/transient.hpp"
 
 namespace coilfit {
 
@@ -61,6 +62,7 @@ struct ClampOption {
     std::string failed_check;         // the first check this option fails, if any
     Verdict pulse_verdict = Verdict::skip;  // clamp.pulse of a zener or TVS option
     bool chosen = false;              // the clamp the spec uses
+    std::optional<TurnOff> turn_off;  // its decay for the plot (with an inductance and a clamp)
 };
 
 // The contact side of the report (src/method.md "Contact side"): what the contacts switch, the

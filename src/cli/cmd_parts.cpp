@@ -9,6 +9,8 @@ namespace {
 
 using io::pad_right;
 
+constexpr std::string_view parts_schema = "coilfit.parts/1";
+
 std::string q(double v, Unit u) { return format_quantity(v, u); }
 
 // A plain aligned table: header row, then rows.
@@ -50,7 +52,7 @@ int run_parts(const PartsOptions& options) {
     std::string kind = options.kind;
     std::string id = options.id;
     if (!kind.empty() && std::find(kinds.begin(), kinds.end(), kind) == kinds.end()) {
-        if (!id.empty()) throw InputError("parts: unknown kind \"" + kind + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay, contactor");
+        if (!id.empty()) throw InputError("parts: unknown kind \"" + io::printable(kind) + "\"; expected one of npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay, contactor");
         id = kind;  // `coilfit parts 2N4401`
         kind.clear();
     }
@@ -142,9 +144,11 @@ int run_parts(const PartsOptions& options) {
     io::Json rel = io::Json::array();
     std::vector<std::vector<std::string>> rel_rows;
     if (kind.empty() || kind == "relay" || kind == "contactor") found += list_relays(table, kind, id, rel, rel_rows);
-    if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + id + "\" in the table");
+    if (!id.empty() && found == 0) throw InputError("parts: no part or preset \"" + io::printable(id) + "\" in the table");
 
     if (options.common.format == "json") {
+        out["schema"] = parts_schema;
+        out["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
         out["transistors"] = bip;
         out["diodes"] = dio;
         out["mosfets"] = mos;
@@ -175,7 +179,7 @@ int run_parts(const PartsOptions& options) {
     if (rel_rows.size() > 1) text += fmt::format("Relays and contactors ({})\n", rel_rows.size() - 1) + table_text(rel_rows) + "\n";
     text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n";
     text += "Read from: ";
-    for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + table.files[i];
+    for (std::size_t i = 0; i < table.files.size(); ++i) text += (i ? ", " : "") + io::printable(table.files[i], 4096);
     text += "\n";
     emit(text, "");
     return exit_pass;

@@ -8,18 +8,26 @@
 #include "io/report_pick_relays.hpp"
 
 namespace coilfit::cli {
+namespace {
+
+constexpr std::string_view pick_schema = "coilfit.pick/1";
+
+}  // namespace
 
 CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
     CLI::App* cmd = app.add_subcommand("pick", "try every transistor (and diode) of the parts table against a spec; list the passing ones first");
     add_spec_options(*cmd, options.spec);
     add_common_options(*cmd, options.common, true);
-    cmd->add_option("--top", options.top, "list only the best N combinations (default: all)");
+    cmd->add_option("--top", options.top, "list only the best N combinations, a whole number; 0 (the default) lists all")
+        ->check(whole_number(0, 1'000'000'000));
     return cmd;
 }
 
 int run_pick(const PickOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, {}, inputs);  // before the table is tried
     const PickResult result = pick(spec, table.catalogue);
     const std::size_t n = options.top == 0 ? result.candidates.size() : std::min(options.top, result.candidates.size());
     // A load and no relay: the relays of the table too (src/core/pick_relays.cpp).
@@ -29,6 +37,9 @@ int run_pick(const PickOptions& options) {
     std::string text;
     if (options.common.format == "json") {
         io::Json j;
+        j["schema"] = pick_schema;
+        j["tool"] = {{"name", "coilfit"}, {"version", COILFIT_VERSION}};
+        j["name"] = spec.name;
         io::Json list = io::Json::array();
         for (std::size_t i = 0; i < n; ++i) {
             const Candidate& c = result.candidates[i];
@@ -90,7 +101,7 @@ int run_pick(const PickOptions& options) {
                 "Values are typical datasheet limits from memory; confirm against the datasheets in use.\n";
         if (picks_relays(spec)) text += io::render_relay_pick_text(relays, 3, text_width());
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     return any_pass ? exit_pass : exit_fail;
 }
 

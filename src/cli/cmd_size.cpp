@@ -3,6 +3,7 @@
 #include "cli/commands.hpp"
 #include "coilfit/sizing.hpp"
 #include "io/netlist.hpp"
+#include "io/plot_svg.hpp"
 #include "io/report_io.hpp"
 
 namespace coilfit::cli {
@@ -12,7 +13,12 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
     add_spec_options(*cmd, options.spec);
     add_common_options(*cmd, options.common, true);
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)");
-    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE");
+    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
+        ->check(file_name());
+    cmd->add_option("--plot", options.plot,
+                    "also draw the turn-off transient of every clamp option (coil current and collector voltage against "
+                    "time) into FILE.svg (written like --output); needs coil.inductance")
+        ->check(file_name());
     return cmd;
 }
 
@@ -20,10 +26,14 @@ int run_size(const SizeOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
     const SizingReport report = size(spec, table.catalogue);
-    if (!options.netlist.empty()) {
-        // Built before anything is written, so a design that cannot be simulated writes nothing.
-        emit(io::spice_netlist(report), options.netlist);
-    }
+    // Every output is checked against the inputs and the others before any is written.
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, options.netlist, inputs, options.plot);
+    // Built before anything is written, so a design that cannot be simulated or drawn writes nothing.
+    const std::string netlist = options.netlist.empty() ? std::string() : io::spice_netlist(report);
+    const std::string plot = options.plot.empty() ? std::string() : io::turn_off_svg(report);
+    if (!options.netlist.empty()) emit(netlist, options.netlist, inputs, "--netlist");
+    if (!options.plot.empty()) emit(plot, options.plot, inputs, "--plot");
     std::string text;
     if (options.common.format == "json") {
         text = io::report_to_json(report).dump(2) + "\n";
@@ -33,7 +43,7 @@ int run_size(const SizeOptions& options) {
         style.width = text_width();
         text = io::render_text(report, style);
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     if (report.verdict == Verdict::fail) return exit_fail;
     if (options.strict && report.has_warnings) return exit_fail;
     return exit_pass;

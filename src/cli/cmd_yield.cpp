@@ -102,8 +102,8 @@ std::string design_line(const Spec& spec, const YieldResult& r) {
     }
     s += ", clamp ";
     s += clamp_type_name(spec.clamp.type);
-    if (spec.clamp.diode) s += " " + spec.clamp.diode->id;
-    if (spec.clamp.zener && spec.clamp.type == ClampType::diode_zener) s += " + " + spec.clamp.zener->id;
+    if (spec.clamp.diode) s += " " + display_id(*spec.clamp.diode);
+    if (spec.clamp.zener && spec.clamp.type == ClampType::diode_zener) s += " + " + display_id(*spec.clamp.zener);
     return s;
 }
 
@@ -190,13 +190,13 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
     j["confidence"] = 0.95;
     j["worst_case"] = r.design.worst.passes() ? "pass" : "fail";
     io::Json design;
-    design["transistor"] = origin(spec.transistor).id;
+    design["transistor"] = display_id(origin(spec.transistor));  // "inline ID" as in every output
     design["driver"] = transistor_kind_name(spec.transistor);
     design[spec.mosfet() ? "gate_resistor_ohm" : "base_resistor_ohm"] =
         r.design.r_drive_ohm ? io::Json(*r.design.r_drive_ohm) : io::Json(nullptr);
     design["clamp"] = clamp_type_name(spec.clamp.type);
-    design["diode"] = spec.clamp.diode ? io::Json(spec.clamp.diode->id) : io::Json(nullptr);
-    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(spec.clamp.zener->id)
+    design["diode"] = spec.clamp.diode ? io::Json(display_id(*spec.clamp.diode)) : io::Json(nullptr);
+    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(display_id(*spec.clamp.zener))
                                                                                    : io::Json(nullptr);
     j["design"] = design;
     io::Json checks = io::Json::array();
@@ -244,29 +244,6 @@ private:
     std::chrono::steady_clock::time_point last_{};
 };
 
-// Accepts only plain decimal digits within [min, max]: CLI11 alone would wrap "-1" round into a
-// huge unsigned value and clamp an overflow silently.
-CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
-    return CLI::Validator(
-        [min, max](std::string& s) -> std::string {
-            const bool digits = !s.empty() && s.size() <= 20 &&
-                                std::all_of(s.begin(), s.end(), [](char ch) { return ch >= '0' && ch <= '9'; });
-            std::uint64_t v = 0;
-            bool overflow = false;
-            for (char ch : s) {
-                const auto d = static_cast<std::uint64_t>(ch - '0');
-                if (!digits) break;
-                if (v > (UINT64_MAX - d) / 10) overflow = true;
-                v = v * 10 + d;
-            }
-            if (!digits || overflow || v < min || v > max) {
-                return fmt::format("expected a whole number from {} to {}, got \"{}\"", min, max, s);
-            }
-            return std::string();
-        },
-        "");
-}
-
 }  // namespace
 
 CLI::App* setup_yield(CLI::App& app, YieldOptions& options) {
@@ -295,6 +272,9 @@ CLI::App* setup_yield(CLI::App& app, YieldOptions& options) {
 int run_yield(const YieldOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
+    // Checked before the samples run, so that a clash is reported at once.
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, {}, inputs);
 
     YieldSettings settings;
     settings.samples = options.samples;
@@ -317,7 +297,7 @@ int run_yield(const YieldOptions& options) {
         style.color = use_color(options.common.output);
         text = render_text(spec, result, style, text_width());
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     return result.passed == result.settings.samples ? exit_pass : exit_fail;
 }
 

@@ -12,6 +12,7 @@ struct SizeOptions {
     CommonOptions common;
     bool strict = false;
     std::string netlist;  // --netlist FILE
+    std::string plot;     // --plot FILE.svg
 };
 CLI::App* setup_size(CLI::App& app, SizeOptions& options);
 int run_size(const SizeOptions& options);

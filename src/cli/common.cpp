@@ -2,11 +2,12 @@
 
 #include <unistd.h>
 
+#include <algorithm>
 #include <cstdio>
 #include <cstdlib>
-#include <filesystem>
-#include <fstream>
 #include <iostream>
+
+#include <fmt/format.h>
 
 namespace coilfit::cli {
 namespace {
@@ -105,9 +106,15 @@ void add_spec_options(CLI::App& app, SpecOptions& options) {
 }
 
 void add_common_options(CLI::App& app, CommonOptions& options, bool with_output) {
-    app.add_option("--parts", options.parts_path, "parts table file or folder (default: $COILFIT_PARTS, else the installed table)");
+    app.add_option("--parts", options.parts_path, "parts table file or folder (default: $COILFIT_PARTS, else the installed table)")
+        ->check(file_name());
     app.add_option("--format", options.format, "output format: text or json")->check(CLI::IsMember({"text", "json"}));
-    if (with_output) app.add_option("--output,-o", options.output, "write the report to FILE (atomically) instead of standard output");
+    if (with_output) {
+        app.add_option("--output,-o", options.output,
+                       "write the report to FILE instead of standard output (- is standard output; a file is replaced "
+                       "atomically, a device or FIFO written; never an input of the run)")
+            ->check(file_name());
+    }
 }
 
 io::SpecDocument build_spec_document(const SpecOptions& options) {
@@ -126,40 +133,55 @@ io::PartsTable load_table(const CommonOptions& options) {
     return io::load_parts(io::resolve_parts_path(options.parts_path));
 }
 
-void emit(const std::string& text, const std::string& output_path) {
-    if (output_path.empty()) {
-        std::cout << text;
-        std::cout.flush();
-        if (!std::cout) throw InputError("cannot write to standard output");
-        return;
-    }
-    namespace fs = std::filesystem;
-    const fs::path target(output_path);
-    fs::path dir = target.parent_path();
-    if (dir.empty()) dir = ".";
-    const fs::path tmp = dir / (target.filename().string() + ".tmp." + std::to_string(::getpid()));
-    {
-        std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
-        if (!out) throw InputError(output_path + ": cannot write here (" + dir.string() + ")");
-        out << text;
-        out.flush();
-        if (!out) {
-            out.close();
-            std::error_code ec;
-            fs::remove(tmp, ec);
-            throw InputError(output_path + ": writing failed; nothing was written");
-        }
-    }
-    std::error_code ec;
-    fs::rename(tmp, target, ec);
-    if (ec) {
-        fs::remove(tmp, ec);
-        throw InputError(output_path + ": cannot replace the file: " + ec.message());
-    }
+io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table) {
+    io::RunInputs in;
+    if (!spec.spec_path.empty() && spec.spec_path != "-") in.push_back(spec.spec_path);
+    in.insert(in.end(), table.files.begin(), table.files.end());
+    return in;
 }
 
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path) {
+    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
+                      inputs);
+}
+
+void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs, const std::string& flag) {
+    std::cout.flush();
+    io::write_output({flag, output_path.empty() ? "-" : output_path}, text, inputs);
+}
+
+CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
+    return CLI::Validator(
+        [min, max](std::string& s) -> std::string {
+            const bool digits = !s.empty() && s.size() <= 20 &&
+                                std::all_of(s.begin(), s.end(), [](char ch) { return ch >= '0' && ch <= '9'; });
+            std::uint64_t v = 0;
+            bool overflow = false;
+            for (char ch : s) {
+                const auto d = static_cast<std::uint64_t>(ch - '0');
+                if (!digits) break;
+                if (v > (UINT64_MAX - d) / 10) overflow = true;
+                v = v * 10 + d;
+            }
+            if (!digits || overflow || v < min || v > max) {
+                return fmt::format("expected a whole number from {} to {}, got \"{}\"", min, max, s);
+            }
+            return std::string();
+        },
+        "");
+}
+
+
+CLI::Validator file_name() {
+    return CLI::Validator([](std::string& s) { return s.empty() ? std::string("expected a file name, got an empty text") : std::string(); },
+                          "");
+}
+
+std::string message_line(const std::string& what) { return io::printable(what, what.size()); }
+
 bool use_color(const std::string& output_path) {
-    if (!output_path.empty()) return false;
+    if (!output_path.empty() && output_path != "-") return false;
     if (const char* nc = std::getenv("NO_COLOR"); nc && *nc) return false;
     if (const char* term = std::getenv("TERM"); term && std::string(term) == "dumb") return false;
     return ::isatty(STDOUT_FILENO) == 1;

@@ -1,12 +1,14 @@
 // Shared wiring of the subcommands: spec flags, output, colour. No engineering here.
 #pragma once
 
+#include <cstdint>
 #include <string>
 #include <utility>
 #include <vector>
 
 #include <CLI/CLI.hpp>
 
+#include "io/output.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
 
@@ -28,7 +30,7 @@ struct SpecOptions {
 struct CommonOptions {
     std::string parts_path;  // --parts; else $COILFIT_PARTS; else the installed table
     std::string format = "text";
-    std::string output;      // --output FILE: written atomically
+    std::string output;      // --output FILE (io/output.hpp); empty: standard output
 };
 
 // Adds SPEC and every spec-field flag (--supply, --coil-resistance, ...) to a subcommand.
@@ -39,9 +41,25 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
 [[nodiscard]] io::SpecDocument build_spec_document(const SpecOptions& options);
 [[nodiscard]] io::PartsTable load_table(const CommonOptions& options);
 
-// Writes text to stdout, or atomically to a file (temporary file in the same folder, then
-// rename), so that a failed run never leaves half a report.
-void emit(const std::string& text, const std::string& output_path);
+// The files this run reads: the spec (unless standard input) and every file of the parts table.
+// No output may replace one of them (io/output.hpp).
+[[nodiscard]] io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table);
+// Checks the run's outputs (--output and, for size, --netlist; empty: not asked for) against its
+// inputs and each other before anything is written.
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path = {});
+// Writes one output through io::write_output: an empty path or "-" is standard output; a file
+// is replaced atomically, a device or FIFO written directly (io/output.hpp).
+void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs = {},
+          const std::string& flag = "--output");
+// A whole number from min to max, digits only: CLI11 alone would wrap "-1" round into a huge
+// unsigned value and clamp an overflow silently.
+[[nodiscard]] CLI::Validator whole_number(std::uint64_t min, std::uint64_t max);
+// A file name: anything but an empty text (an empty --parts must not fall back to the default).
+[[nodiscard]] CLI::Validator file_name();
+// An error message as printed: whatever input it echoes is already escaped where it was
+// written; this escapes the rest (io::printable), so nothing raw ever reaches the terminal.
+[[nodiscard]] std::string message_line(const std::string& what);
 // Colour only on a terminal, never with NO_COLOR or when writing a file.
 [[nodiscard]] bool use_color(const std::string& output_path);
 // Terminal width for wrapping (COLUMNS, else 100).

@@ -11,6 +11,9 @@ int main(int argc, char** argv) {
                  "microcontroller pin, at worst case.\nExit codes: 0 every check passed, 1 a check failed, 2 bad usage or input."};
     app.set_version_flag("--version", std::string("coilfit ") + COILFIT_VERSION);
     app.require_subcommand(1);
+    // One rule for repeated options, set before any is added so that every option of every
+    // subcommand inherits it: the last value given wins (README, "Usage").
+    app.option_defaults()->multi_option_policy(CLI::MultiOptionPolicy::TakeLast);
 
     SizeOptions size_options;
     PartsOptions parts_options;
@@ -34,10 +37,10 @@ int main(int argc, char** argv) {
         if (pick_cmd->parsed()) return run_pick(pick_options);
         if (yield_cmd->parsed()) return run_yield(yield_options);
     } catch (const coilfit::InputError& e) {
-        std::cerr << "coilfit: error: " << e.what() << "\n";
+        std::cerr << "coilfit: error: " << message_line(e.what()) << "\n";
         return exit_bad_input;
     } catch (const std::exception& e) {
-        std::cerr << "coilfit: error: " << e.what() << "\n";
+        std::cerr << "coilfit: error: " << message_line(e.what()) << "\n";
         return exit_bad_input;
     } catch (...) {
         // Nothing escapes main (style.md, "Errors").

@@ -24,9 +24,9 @@ namespace {
 Candidate candidate_of(const Spec& trial, const Sized& sized) {
     const Evaluation& e = sized.worst;
     Candidate c;
-    c.transistor = origin(trial.transistor).id;
+    c.transistor = display_id(origin(trial.transistor));  // "inline ID" for a record of the spec
     c.driver = std::string(transistor_kind_name(trial.transistor));
-    c.diode = trial.clamp.diode ? trial.clamp.diode->id : std::string();
+    c.diode = trial.clamp.diode ? display_id(*trial.clamp.diode) : std::string();
     c.family = transistor_family(trial.transistor);
     c.resistor_ohm = sized.r_drive_ohm;
     c.pin_current_max_a = std::max(e.driver.at[0].pin_current_max_a, e.driver.at[1].pin_current_max_a);

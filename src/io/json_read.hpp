@@ -13,6 +13,7 @@
 #include <nlohmann/json.hpp>
 
 #include "coilfit/quantity.hpp"
+#include "coilfit/text.hpp"
 
 namespace coilfit::io {
 
@@ -85,10 +86,12 @@ private:
 // Describes a JSON value briefly for messages: "\"fourty\"", "true", "an object", ...
 [[nodiscard]] std::string describe(const Json& j);
 
-// Text made safe for a one-line message: control characters and bytes that are not UTF-8
-// become \xNN, and the text is cut after max_chars code points with "...".
-[[nodiscard]] std::string printable(std::string_view text, std::size_t max_chars = 40);
-// True when text is well-formed UTF-8 (no overlong forms, no surrogates, at most U+10FFFF).
-[[nodiscard]] bool is_utf8(std::string_view text);
+// Text made safe for a one-line message: the one escaping function (coilfit/text.hpp), so that
+// bytes that are not UTF-8 and controls show as \xNN, invisible and bidi characters as \uNNNN;
+// cut after max_chars characters with "...". Use it wherever input is echoed.
+[[nodiscard]] inline std::string printable(std::string_view text, std::size_t max_chars = 40) {
+    return escape_text(text, max_chars);
+}
+using coilfit::is_utf8;
 
 }  // namespace coilfit::io

@@ -100,8 +100,8 @@ void read_section(ObjectReader& top, const SpecDocument& d, const std::string& k
 
 SpecDocument parse_spec_text(std::string_view text, const std::string& file) {
     SpecDocument d;
-    d.origin.file = file;
-    d.doc = parse_json(text, file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
+    d.origin.file = printable(file, 4096);  // a file name echoed in messages, escaped
+    d.doc = parse_json(text, d.origin.file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
     if (!d.doc.is_object()) fail(d.origin, "", "expected a JSON object { \"schema\": \"coilfit.spec/1\", ... }, got " + describe(d.doc));
     return d;
 }
