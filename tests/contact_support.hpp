@@ -12,7 +12,6 @@
 
 namespace coilfit::test::contact {
 
-
 inline const coilfit::io::PartsTable& table() { return test::shipped_table(); }
 
 // A 24 V channel on an inline relay: DC rating 30 V 10 A, a two-point breaking curve, make
@@ -56,6 +55,5 @@ inline void check_numbers_finite(const coilfit::io::Json& j) {
         for (const auto& v : j) check_numbers_finite(v);
     }
 }
-
 
 }  // namespace coilfit::test::contact

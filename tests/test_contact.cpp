@@ -8,9 +8,9 @@
 #include "coilfit/contact.hpp"
 #include "coilfit/pick_relays.hpp"
 #include "coilfit/report.hpp"
+#include "contact_support.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
-#include "contact_support.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -22,7 +22,8 @@ using namespace coilfit::test::contact;
 TEST_SUITE("contact") {
     TEST_CASE("the DC breaking curve is interpolated on log-log axes between its points") {
         // Hand-worked: between (30 V, 10 A) and (60 V, 1 A) at 30 sqrt(2) V, t = ln(sqrt 2)/ln 2 = 1/2,
-        // so I = 10 A x (1/10)^(1/2) = 3.1623 A; at 45 V, t = ln 1.5 / ln 2 = 0.58496, I = 10 x 0.1^t = 10^(1 - 0.58496) = 2.6004 A.
+        // so I = 10 A x (1/10)^(1/2) = 3.1623 A; at 45 V, t = ln 1.5 / ln 2 = 0.58496, I = 10 x 0.1^t = 10^(1 -
+        // 0.58496) = 2.6004 A.
         const std::vector<BreakingPoint> curve{{30.0, 10.0}, {60.0, 1.0}};
         CHECK(breaking_current_at(curve, 30.0 * std::sqrt(2.0)).current_a == Approx(3.16228).epsilon(1e-5));
         CHECK(breaking_current_at(curve, 45.0).current_a == Approx(2.60038).epsilon(1e-5));
@@ -38,7 +39,8 @@ TEST_SUITE("contact") {
         // Closed form: a constant-power limit (10 W) is a straight line on log-log axes, so the
         // interpolation between (20 V, 0.5 A) and (100 V, 0.1 A) gives 10 W / V exactly.
         const std::vector<BreakingPoint> power{{20.0, 0.5}, {100.0, 0.1}};
-        for (double v : {25.0, 50.0, 80.0}) CHECK(breaking_current_at(power, v).current_a == Approx(10.0 / v).epsilon(1e-12));
+        for (double v : {25.0, 50.0, 80.0})
+            CHECK(breaking_current_at(power, v).current_a == Approx(10.0 / v).epsilon(1e-12));
     }
 
     TEST_CASE("the RC snubber follows the empirical rule, worked by hand") {
@@ -55,7 +57,8 @@ TEST_SUITE("contact") {
 
     TEST_CASE("an AC inductive load gets the RC snubber values in the report and its JSON") {
         io::Json doc = base_spec();
-        doc["load"] = io::Json::parse(R"({ "type": "ac", "voltage": "230V", "kind": "inductive", "current": "2A", "power_factor": 0.6 })");
+        doc["load"] = io::Json::parse(
+            R"({ "type": "ac", "voltage": "230V", "kind": "inductive", "current": "2A", "power_factor": 0.6 })");
         const SizingReport r = sized(doc);
         REQUIRE(r.contact.has_value());
         REQUIRE(r.contact->snubber_capacitance_f.has_value());
@@ -84,8 +87,9 @@ TEST_SUITE("contact") {
         CHECK(r.quantity("load_inrush_a").value_or(0) == Approx(30.0));
         // The default is noted as a default to confirm.
         bool noted = false;
-        for (const auto& d : r.spec.defaults_used) noted = noted || (d.find("load.inrush 6 x") != std::string::npos &&
-                                                                    d.find("confirm for the real load") != std::string::npos);
+        for (const auto& d : r.spec.defaults_used)
+            noted = noted || (d.find("load.inrush 6 x") != std::string::npos &&
+                              d.find("confirm for the real load") != std::string::npos);
         CHECK(noted);
         // No make current: 30 A against 2 x 10 A = 20 A fails.
         io::Json doc = base_spec();
@@ -177,7 +181,8 @@ TEST_SUITE("contact") {
     }
 
     TEST_CASE("every contact check is skipped with a reason when its data are missing") {
-        const char* ids[] = {"contact.voltage", "contact.current", "contact.inrush", "contact.breaking", "contact.min_load"};
+        const char* ids[] = {"contact.voltage", "contact.current", "contact.inrush", "contact.breaking",
+                             "contact.min_load"};
         // No load.
         io::Json doc = base_spec();
         doc.erase("load");
@@ -230,5 +235,4 @@ TEST_SUITE("contact") {
         doc["load"] = io::Json::parse(R"({ "type": "ac", "voltage": "230V", "kind": "resistive", "current": "2A" })");
         CHECK(check(sized(doc), "contact.breaking").reason.find("an AC load") != std::string::npos);
     }
-
 }

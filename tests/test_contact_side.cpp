@@ -8,9 +8,9 @@
 #include "coilfit/contact.hpp"
 #include "coilfit/pick_relays.hpp"
 #include "coilfit/report.hpp"
+#include "contact_support.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
-#include "contact_support.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -45,7 +45,8 @@ TEST_SUITE("contact") {
         CHECK(s.coil.self_heating_k.value_or(0) == Approx(15.0));
         // A coil preset beside a relay is refused; an unknown relay names the command that lists them.
         doc["coil"] = io::Json::parse(R"({ "preset": "pcb-relay-24v-360mw" })");
-        CHECK_THROWS_WITH_AS(read(doc), "spec.json: coil.preset: given with relay; the relay's record fills the coil", InputError);
+        CHECK_THROWS_WITH_AS(read(doc), "spec.json: coil.preset: given with relay; the relay's record fills the coil",
+                             InputError);
         doc.erase("coil");
         doc["relay"] = "no-such-relay";
         CHECK_THROWS_WITH_AS(read(doc), doctest::Contains("no relay or contactor \"no-such-relay\""), InputError);
@@ -69,8 +70,9 @@ TEST_SUITE("contact") {
     TEST_CASE("bad load and relay fields exit with the field named") {
         io::Json doc = base_spec();
         doc["load"]["power_factor"] = 0.8;
-        CHECK_THROWS_WITH_AS(read(doc), "spec.json: load.power_factor: given for a DC load; give load.time_constant (its L/R) instead",
-                             InputError);
+        CHECK_THROWS_WITH_AS(
+            read(doc), "spec.json: load.power_factor: given for a DC load; give load.time_constant (its L/R) instead",
+            InputError);
         doc = base_spec();
         doc["load"]["inrush"] = "six times";
         CHECK_THROWS_AS(read(doc), InputError);
@@ -118,9 +120,12 @@ TEST_SUITE("contact") {
             std::vector<const char*> evaluated;
         };
         const Case cases[] = {
-            {"irrigation-pump.json", {"load_inrush_a", "breaking_current_limit_a"},
+            {"irrigation-pump.json",
+             {"load_inrush_a", "breaking_current_limit_a"},
              {"contact.voltage", "contact.current", "contact.inrush", "contact.breaking", "contact.min_load"}},
-            {"greenhouse-heater.json", {"load_inrush_a"}, {"contact.voltage", "contact.current", "contact.inrush", "contact.min_load"}},
+            {"greenhouse-heater.json",
+             {"load_inrush_a"},
+             {"contact.voltage", "contact.current", "contact.inrush", "contact.min_load"}},
         };
         for (const Case& c : cases) {
             CAPTURE(c.file);
@@ -173,8 +178,10 @@ TEST_SUITE("contact") {
             REQUIRE(rec != nullptr);
             Spec s = with_relay(spec, *rec);
             s.transistor = *table().catalogue.find_transistor(c.driver.transistor);
-            if (const auto* a = s.array()) s.clamp.diode = a->diode;
-            else s.clamp.diode = *table().catalogue.find_diode(c.driver.diode);
+            if (const auto* a = s.array())
+                s.clamp.diode = a->diode;
+            else
+                s.clamp.diode = *table().catalogue.find_diode(c.driver.diode);
             const SizingReport sr = size(s, Catalogue{});
             CHECK(sr.verdict == Verdict::pass);
             CHECK(sr.find_check("contact.inrush")->verdict != Verdict::skip);
@@ -187,4 +194,3 @@ TEST_SUITE("contact") {
         CHECK(!picks_relays(read(doc)));
     }
 }
-

@@ -33,11 +33,11 @@ struct BreakingPoint {  // one point of the maximum DC breaking curve
 };
 
 struct Contacts {
-    std::string form;                          // "1 form A", "2 form C", ...
-    std::optional<ContactRating> ac, dc;       // resistive ratings
-    std::vector<BreakingPoint> dc_breaking;    // sorted by voltage, current falling
-    std::optional<double> make_current_a;      // the inrush the contacts may make
-    std::optional<ContactRating> min_load;     // below it the contacts may not wet
+    std::string form;                        // "1 form A", "2 form C", ...
+    std::optional<ContactRating> ac, dc;     // resistive ratings
+    std::vector<BreakingPoint> dc_breaking;  // sorted by voltage, current falling
+    std::optional<double> make_current_a;    // the inrush the contacts may make
+    std::optional<ContactRating> min_load;   // below it the contacts may not wet
 };
 
 // The relay or contactor a spec names: where it came from and its contacts (its coil data fill
@@ -91,12 +91,12 @@ inline constexpr double slow_release_current_a = 3.0;
 
 // How a contact check came out (CheckValue::detail), for its words.
 enum class ContactCase : std::uint8_t {
-    rated,            // against the record's rating
-    no_make_rating,   // contact.inrush: no make_current; the steady rating with the 2x rule
-    above_curve,      // contact.breaking: the load voltage is above the curve's last point
-    below_curve,      // contact.breaking: below the curve's first point (its first current)
-    slow_release,     // contact.breaking passes, but a plain diode clamp releases slowly
-    min_voltage,      // contact.min_load: the voltage (not the current) is below the minimum
+    rated,           // against the record's rating
+    no_make_rating,  // contact.inrush: no make_current; the steady rating with the 2x rule
+    above_curve,     // contact.breaking: the load voltage is above the curve's last point
+    below_curve,     // contact.breaking: below the curve's first point (its first current)
+    slow_release,    // contact.breaking passes, but a plain diode clamp releases slowly
+    min_voltage,     // contact.min_load: the voltage (not the current) is below the minimum
 };
 
 // The contact checks of a spec into `checks`; each is left skipped when its data are missing.

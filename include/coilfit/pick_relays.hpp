@@ -35,6 +35,7 @@ struct RelayPickResult {
 // stay where the record gives none, as with `--relay` on a spec file.
 [[nodiscard]] Spec with_relay(const Spec& spec, const RelayRecord& relay);
 
-[[nodiscard]] RelayPickResult pick_relays(const Spec& spec, const Catalogue& catalogue, const std::vector<RelayRecord>& relays);
+[[nodiscard]] RelayPickResult pick_relays(const Spec& spec, const Catalogue& catalogue,
+                                          const std::vector<RelayRecord>& relays);
 
 }  // namespace coilfit

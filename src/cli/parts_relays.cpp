@@ -23,7 +23,8 @@ std::size_t list_relays(const io::PartsTable& table, const std::string& kind, co
         for (const auto& [k, v] : e.coil_fields.items()) j[k] = v;
         json.push_back(j);
         const Contacts* c = r.contacts ? &*r.contacts : nullptr;
-        rows.push_back({r.id, std::string(relay_kind_name(r.kind)), q(r.coil.rated_voltage_v, Unit::volt) + " " + q(r.coil.resistance_ohm, Unit::ohm),
+        rows.push_back({r.id, std::string(relay_kind_name(r.kind)),
+                        q(r.coil.rated_voltage_v, Unit::volt) + " " + q(r.coil.resistance_ohm, Unit::ohm),
                         c ? c->form : "-", c ? rating_words(c->ac) : "-", c ? rating_words(c->dc) : "-",
                         c && c->make_current_a ? q(*c->make_current_a, Unit::ampere) : "-"});
     }

@@ -48,25 +48,31 @@ std::optional<LoadClass> load_class_from_name(std::string_view name) {
 }
 
 bool is_inductive(LoadClass c) {
-    return c == LoadClass::inductive || c == LoadClass::motor || c == LoadClass::solenoid || c == LoadClass::transformer;
+    return c == LoadClass::inductive || c == LoadClass::motor || c == LoadClass::solenoid ||
+           c == LoadClass::transformer;
 }
 
 InrushDefault default_inrush(LoadClass c, bool ac) {
     // src/method.md "Contact side": common practice, from memory, to be confirmed for the real load.
     switch (c) {
-    case LoadClass::lamp: return {10.0, 10e-3, "incandescent filament, cold"};
-    case LoadClass::motor: return {6.0, 0.5, "locked rotor"};
-    case LoadClass::capacitive: return {30.0, 1e-3, "capacitive input of a switch-mode supply or LED driver"};
-    case LoadClass::transformer: return {10.0, 10e-3, "core magnetising"};
-    case LoadClass::solenoid:
-        if (ac) return {5.0, 20e-3, "armature open until it seals"};
-        return {1.0, 0.0, "the current rises with L/R"};
-    case LoadClass::inductive:
-        // Not a row of the method: taken as the solenoid's (an iron-cored AC load draws more
-        // until its core closes; a DC one rises with L/R), src/method.md "Refinements".
-        if (ac) return {5.0, 20e-3, "iron-cored, as an AC solenoid until it seals"};
-        return {1.0, 0.0, "the current rises with L/R"};
-    case LoadClass::resistive: break;
+        case LoadClass::lamp:
+            return {10.0, 10e-3, "incandescent filament, cold"};
+        case LoadClass::motor:
+            return {6.0, 0.5, "locked rotor"};
+        case LoadClass::capacitive:
+            return {30.0, 1e-3, "capacitive input of a switch-mode supply or LED driver"};
+        case LoadClass::transformer:
+            return {10.0, 10e-3, "core magnetising"};
+        case LoadClass::solenoid:
+            if (ac) return {5.0, 20e-3, "armature open until it seals"};
+            return {1.0, 0.0, "the current rises with L/R"};
+        case LoadClass::inductive:
+            // Not a row of the method: taken as the solenoid's (an iron-cored AC load draws more
+            // until its core closes; a DC one rises with L/R), src/method.md "Refinements".
+            if (ac) return {5.0, 20e-3, "iron-cored, as an AC solenoid until it seals"};
+            return {1.0, 0.0, "the current rises with L/R"};
+        case LoadClass::resistive:
+            break;
     }
     return {1.0, 0.0, "no inrush"};
 }
@@ -133,9 +139,11 @@ void contact_checks(const Spec& spec, CheckSet& checks) {
     const std::optional<ContactRating>& rating = ac ? k.ac : k.dc;
     // contact.voltage and contact.current: the load within the AC or DC rating.
     if (rating) {
-        checks.set(CheckId::contact_voltage, with_detail(at_most(load.voltage_v, rating->voltage_v), ContactCase::rated));
+        checks.set(CheckId::contact_voltage,
+                   with_detail(at_most(load.voltage_v, rating->voltage_v), ContactCase::rated));
         if (load.current_a) {
-            checks.set(CheckId::contact_current, with_detail(at_most(*load.current_a, rating->current_a), ContactCase::rated));
+            checks.set(CheckId::contact_current,
+                       with_detail(at_most(*load.current_a, rating->current_a), ContactCase::rated));
         }
     }
     // contact.inrush: at most make_current when given; otherwise at most twice the steady rating
@@ -154,7 +162,9 @@ void contact_checks(const Spec& spec, CheckSet& checks) {
         const double i = *load.current_a;
         const BreakingLimit b = breaking_current_at(k.dc_breaking, load.voltage_v);
         CheckValue v = at_most(i, b.current_a);
-        v.detail = static_cast<std::uint8_t>(b.above ? ContactCase::above_curve : b.below ? ContactCase::below_curve : ContactCase::rated);
+        v.detail = static_cast<std::uint8_t>(b.above   ? ContactCase::above_curve
+                                             : b.below ? ContactCase::below_curve
+                                                       : ContactCase::rated);
         if (b.above) v.verdict = Verdict::fail;
         // A plain diode across the coil releases slowly: a long arc at several amperes DC.
         if (v.verdict == Verdict::pass && i > slow_release_current_a && spec.clamp.type == ClampType::diode) {

@@ -11,7 +11,8 @@ std::string reason_for(const RelayRecord& relay, const PickResult& r) {
     if (r.candidates.empty()) return display_id(relay) + ": no transistor of the table to try";
     const Candidate& best = r.candidates.front();
     std::vector<std::string> failed = best.failed;
-    std::stable_partition(failed.begin(), failed.end(), [](const std::string& id) { return id.rfind("contact.", 0) == 0; });
+    std::stable_partition(failed.begin(), failed.end(),
+                          [](const std::string& id) { return id.rfind("contact.", 0) == 0; });
     std::string words;
     for (std::size_t i = 0; i < failed.size() && i < 3; ++i) words += (i ? ", " : "") + failed[i];
     return display_id(relay) + ": even its best combination (" + best.transistor + ") fails " + words;

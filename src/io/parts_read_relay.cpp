@@ -10,7 +10,8 @@ using namespace records;
 
 // Fields of the record itself; every other field is the coil's.
 bool record_field(const std::string& key) {
-    return key == "id" || key == "kind" || key == "description" || key == "source" || key == "package" || key == "contacts";
+    return key == "id" || key == "kind" || key == "description" || key == "source" || key == "package" ||
+           key == "contacts";
 }
 
 ContactRating read_rating(ObjectReader& parent, const std::string& key, double v_lo, double i_lo) {
@@ -24,20 +25,26 @@ ContactRating read_rating(ObjectReader& parent, const std::string& key, double v
 }
 
 std::vector<BreakingPoint> read_breaking(ObjectReader& r) {
-    auto pts = read_points<BreakingPoint>(r, "dc_breaking", [](ObjectReader& pr) {
-        BreakingPoint p;
-        p.voltage_v = pr.within("voltage", pr.positive("voltage", pr.required("voltage", Unit::volt)), 1.0, 1e4);
-        p.current_a = pr.within("current", pr.positive("current", pr.required("current", Unit::ampere)), 1e-3, 1e4);
-        return p;
-    }, false);
-    check_sorted(r, "dc_breaking", pts, [](const BreakingPoint& p) { return p.voltage_v; }, "voltage");
+    auto pts = read_points<BreakingPoint>(
+        r, "dc_breaking",
+        [](ObjectReader& pr) {
+            BreakingPoint p;
+            p.voltage_v = pr.within("voltage", pr.positive("voltage", pr.required("voltage", Unit::volt)), 1.0, 1e4);
+            p.current_a = pr.within("current", pr.positive("current", pr.required("current", Unit::ampere)), 1e-3, 1e4);
+            return p;
+        },
+        false);
+    check_sorted(
+        r, "dc_breaking", pts, [](const BreakingPoint& p) { return p.voltage_v; }, "voltage");
     // A breaking curve falls with voltage: a rising point is a unit slip or a swapped pair.
     for (std::size_t i = 1; i < pts.size(); ++i) {
         if (pts[i].current_a > pts[i - 1].current_a) {
-            r.fail_at("dc_breaking[" + std::to_string(i) + "]",
-                      fmt::format("expected a current of at most the point before ({}), got {}: the breaking current falls "
-                                  "as the voltage rises", format_quantity(pts[i - 1].current_a, Unit::ampere, 6),
-                                  format_quantity(pts[i].current_a, Unit::ampere, 6)));
+            r.fail_at(
+                "dc_breaking[" + std::to_string(i) + "]",
+                fmt::format("expected a current of at most the point before ({}), got {}: the breaking current falls "
+                            "as the voltage rises",
+                            format_quantity(pts[i - 1].current_a, Unit::ampere, 6),
+                            format_quantity(pts[i].current_a, Unit::ampere, 6)));
         }
     }
     return pts;
@@ -48,9 +55,13 @@ Contacts read_contacts(ObjectReader& r) {
     c.form = r.text("form", 32).value_or("");
     if (r.get("ac")) c.ac = read_rating(r, "ac", 1.0, 1e-3);
     if (r.get("dc")) c.dc = read_rating(r, "dc", 1.0, 1e-3);
-    if (!c.ac && !c.dc) r.fail_at("ac", "missing; contacts need an AC or a DC rating (or both), such as { \"voltage\": \"250V\", \"current\": \"10A\" }");
+    if (!c.ac && !c.dc)
+        r.fail_at("ac",
+                  "missing; contacts need an AC or a DC rating (or both), such as { \"voltage\": \"250V\", "
+                  "\"current\": \"10A\" }");
     c.dc_breaking = read_breaking(r);
-    if (auto v = r.quantity("make_current", Unit::ampere)) c.make_current_a = r.within("make_current", r.positive("make_current", *v), 1e-3, 1e5);
+    if (auto v = r.quantity("make_current", Unit::ampere))
+        c.make_current_a = r.within("make_current", r.positive("make_current", *v), 1e-3, 1e5);
     if (r.get("min_load")) c.min_load = read_rating(r, "min_load", 1e-3, 1e-9);
     return c;
 }
@@ -61,10 +72,14 @@ RelayEntry read_relay(ObjectReader& r, const Json& record, RecordPlace place) {
     RelayEntry e;
     RelayRecord& rel = e.record;
     rel.id = read_id(r);
-    const std::string kind = place == RecordPlace::table ? r.required_text("kind", 32) : r.text("kind", 32).value_or("relay");
-    if (kind == "relay") rel.kind = RelayKind::relay;
-    else if (kind == "contactor") rel.kind = RelayKind::contactor;
-    else r.fail_at("kind", "expected \"relay\" or \"contactor\", got \"" + printable(kind) + "\"");
+    const std::string kind =
+        place == RecordPlace::table ? r.required_text("kind", 32) : r.text("kind", 32).value_or("relay");
+    if (kind == "relay")
+        rel.kind = RelayKind::relay;
+    else if (kind == "contactor")
+        rel.kind = RelayKind::contactor;
+    else
+        r.fail_at("kind", "expected \"relay\" or \"contactor\", got \"" + printable(kind) + "\"");
     for (const auto& [key, value] : record.items()) {
         if (record_field(key)) continue;
         e.coil_fields[key] = value;

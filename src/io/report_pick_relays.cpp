@@ -21,9 +21,10 @@ std::string resistor_text(const Candidate& c) {
 }  // namespace
 
 std::string render_relay_pick_text(const RelayPickResult& result, std::size_t per_relay, std::size_t width) {
-    std::string out = fmt::format("\nRelays of the table for this load: {} of {} relay and driver combinations pass both sides "
-                                  "({} records with contact ratings)\n\n",
-                                  result.passing.size(), result.combinations, result.relays_tried);
+    std::string out = fmt::format(
+        "\nRelays of the table for this load: {} of {} relay and driver combinations pass both sides "
+        "({} records with contact ratings)\n\n",
+        result.passing.size(), result.combinations, result.relays_tried);
     std::vector<std::array<std::string, 7>> rows;
     rows.push_back({"relay", "kind", "transistor", "diode", "resistor", "worst check", "margin"});
     std::string last;
@@ -37,8 +38,9 @@ std::string render_relay_pick_text(const RelayPickResult& result, std::size_t pe
             continue;
         }
         const Candidate& c = r.driver;
-        rows.push_back({shown == 1 ? r.relay : std::string(), shown == 1 ? std::string(relay_kind_name(r.kind)) : std::string(),
-                        c.transistor, c.diode.empty() ? "-" : c.diode, resistor_text(c), c.worst_check, margin_text(c.worst_margin)});
+        rows.push_back({shown == 1 ? r.relay : std::string(),
+                        shown == 1 ? std::string(relay_kind_name(r.kind)) : std::string(), c.transistor,
+                        c.diode.empty() ? "-" : c.diode, resistor_text(c), c.worst_check, margin_text(c.worst_margin)});
     }
     std::array<std::size_t, 7> w{};
     for (const auto& row : rows)
@@ -46,18 +48,22 @@ std::string render_relay_pick_text(const RelayPickResult& result, std::size_t pe
     if (rows.size() > 1) {
         for (const auto& row : rows) {
             std::string line = " ";
-            for (std::size_t k = 0; k < row.size(); ++k) line += " " + (k == 6 ? pad_left(row[k], w[k]) : pad_right(row[k], w[k]));
+            for (std::size_t k = 0; k < row.size(); ++k)
+                line += " " + (k == 6 ? pad_left(row[k], w[k]) : pad_right(row[k], w[k]));
             while (!line.empty() && line.back() == ' ') line.pop_back();
             out += line + "\n";
         }
     }
-    if (hidden) out += fmt::format("  ... {} more combinations (the best {} of each relay are listed)\n", hidden, per_relay);
+    if (hidden)
+        out += fmt::format("  ... {} more combinations (the best {} of each relay are listed)\n", hidden, per_relay);
     if (!result.reasons.empty()) {
         out += "\nRelays with no passing combination:\n";
         for (const auto& r : result.reasons) out += "  - " + wrap(r, width, 4) + "\n";
     }
-    out += "\nSize one with `coilfit size SPEC --relay ID --transistor ID --diode ID`; the relay records hold values typical "
-           "of their class, from memory: use the ratings of the relay in use.\n";
+    out +=
+        "\nSize one with `coilfit size SPEC --relay ID --transistor ID --diode ID`; the relay records hold values "
+        "typical "
+        "of their class, from memory: use the ratings of the relay in use.\n";
     return out;
 }
 

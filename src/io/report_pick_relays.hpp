@@ -9,7 +9,8 @@
 namespace coilfit::io {
 
 // At most `per_relay` combinations of each relay are listed (its best first); 0 lists all.
-[[nodiscard]] std::string render_relay_pick_text(const RelayPickResult& result, std::size_t per_relay, std::size_t width);
+[[nodiscard]] std::string render_relay_pick_text(const RelayPickResult& result, std::size_t per_relay,
+                                                 std::size_t width);
 [[nodiscard]] Json relay_pick_to_json(const RelayPickResult& result);
 
 }  // namespace coilfit::io

@@ -26,8 +26,8 @@ std::string render_contact_text(const SizingReport& report, const TextStyle& sty
     line("load", c.load);
     if (c.inrush_a) line("inrush", qf(*c.inrush_a, Unit::ampere) + " (" + c.inrush_words + ")");
     if (c.snubber_capacitance_f && c.snubber_resistance_ohm) {
-        line("RC snubber", qf(*c.snubber_capacitance_f, Unit::farad) + " in series with " + qf(*c.snubber_resistance_ohm, Unit::ohm) +
-                               " (empirical rule; confirm on the bench)");
+        line("RC snubber", qf(*c.snubber_capacitance_f, Unit::farad) + " in series with " +
+                               qf(*c.snubber_resistance_ohm, Unit::ohm) + " (empirical rule; confirm on the bench)");
     }
     if (c.varistor_voltage_v) line("or varistor", "rated at least " + qf(*c.varistor_voltage_v, Unit::volt));
     if (c.release_plain_s) {
