@@ -25,7 +25,7 @@ coilfit_bad_input(binary-garbage-on-stdin
   "coilfit: error: <stdin>:1:1: not valid JSON: invalid literal"
   ARGS size - INPUT garbage.bin)
 coilfit_bad_input(unknown-key
-  "coilfit: error: unknown-key.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, pulldown, schema, supply, switching, transistor)"
+  "coilfit: error: unknown-key.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, pulldown, relay, schema, supply, switching, transistor)"
   ARGS size unknown-key.json)
 coilfit_bad_input(unknown-schema
   "coilfit: error: unknown-schema.json: schema: expected \"coilfit.spec/1\" (the schema this coilfit reads), got \"coilfit.spec/2\""

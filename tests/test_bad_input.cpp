@@ -168,7 +168,7 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("schema", 1), 2, R"(spec.json: schema: expected "coilfit.spec/1" (the schema this coilfit reads), got 1)"},
         {S, spec_with("suply", io::Json::object()), 2,
          "spec.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, "
-         "pulldown, schema, supply, switching, transistor)"},
+         "pulldown, relay, schema, supply, switching, transistor)"},
         {S, spec_with("coil.resistence", "400R"), 2,
          "spec.json: coil.resistence: unknown key (expected one of: inductance, max_release_time, max_temperature, max_voltage, must_operate, "
          "must_operate_temp, must_release, preset, rated_voltage, reference_temp, resistance, self_heating, "
@@ -280,7 +280,7 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("policy.vbe_low", "3V"), 2, "spec.json: policy.vbe_low: expected a voltage from 0 V to 2 V, got 3 V"},
         {S, spec_with("switching.frequency", "-1Hz"), 2,
          "spec.json: switching.frequency: expected a frequency greater than zero, got -1 Hz"},
-        {S, spec_with("load.kind", "mains"), 2, R"(spec.json: load.kind: expected "ac" or "dc", got "mains")"},
+        {S, spec_with("load.kind", "mains"), 2, R"(spec.json: load.kind: expected resistive, inductive, motor, lamp, capacitive, solenoid or transformer (or "ac" or "dc"), got "mains")"},
         {S, spec_with("load.voltage", "-5V"), 2, "spec.json: load.voltage: expected a voltage of zero or more, got -5 V"},
         // Texts.
         {S, spec_with("name", "valve \x1b[31mK2"), 2,
@@ -299,11 +299,11 @@ std::vector<BadInput> parts_rows() {
         {P, "{}", 2, "parts/test.json: expected a JSON list [ ... ] of part records, got an object"},
         {P, "[1]", 2, "parts/test.json: [0]: expected a JSON object { ... }, got 1"},
         {P, table_of(with(good_npn, "kind", nullptr)), 2,
-         "parts/test.json: [0].kind: missing; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
+         "parts/test.json: [0].kind: missing; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor"},
         {P, table_of(with(good_npn, "kind", "triode")), 2,
-         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
+         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor"},
         {P, table_of(with(good_npn, "kind", 3)), 2,
-         "parts/test.json: [0].kind: expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin, got 3"},
+         "parts/test.json: [0].kind: expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor, got 3"},
         {P, table_of(with(good_npn, "id", "")), 2, R"(parts/test.json: [0].id: expected an id such as "2N4401", got an empty text)"},
         {P, table_of(with(good_npn, "id", " QT1")), 2, R"(parts/test.json: [0].id: expected an id without spaces at either end, got " QT1")"},
         {P, table_of(with(good_npn, "id", "Q\x07")), 2, R"(parts/test.json: [0].id: expected a text without control characters, got "Q\x07")"},

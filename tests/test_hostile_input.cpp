@@ -107,7 +107,7 @@ std::vector<Row> rows() {
          "--diode"},
         {S, "{ \"na" + zwsp + "me\": \"K2\"," + spec_text("K2").substr(1),
          "spec.json: na\\u200bme: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, "
-         "policy, pulldown, schema, supply, switching, transistor)"},
+         "policy, pulldown, relay, schema, supply, switching, transistor)"},
         // Ids in the table: no bidi controls, no invisible characters.
         {P, npn_with_id("QT" + rlo + "1"), R"(parts/test.json: [0].id: expected a text without bidirectional controls, got "QT\u202e1")"},
         {P, npn_with_id("2N4401" + zwsp), R"(parts/test.json: [0].id: expected an id without invisible characters, got "2N4401\u200b")"},

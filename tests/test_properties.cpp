@@ -156,6 +156,21 @@ io::Json random_spec(Random& rng) {
     if (rng.chance(0.5)) {
         j["load"] = {{"voltage", value(rng, rng.uniform(0.0, 1e5), "V")}, {"kind", rng.chance(0.5) ? "ac" : "dc"}};
         if (rng.chance(0.5)) j["load"]["current"] = value(rng, rng.uniform(0.0, 1e4), "A");
+        if (rng.chance(0.5)) {
+            // Edition 2: the kind of load, its inrush, power factor or L/R, and a relay record.
+            constexpr const char* kinds[] = {"resistive", "inductive", "motor", "lamp", "capacitive", "solenoid", "transformer"};
+            const bool ac = j["load"]["kind"] == "ac";
+            j["load"]["type"] = ac ? "ac" : "dc";
+            j["load"]["kind"] = kinds[rng.below(7)];
+            if (rng.chance(0.3)) j["load"]["inrush"] = std::to_string(rng.uniform(1.0, 100.0)) + "x";
+            if (ac && rng.chance(0.3)) j["load"]["power_factor"] = rng.uniform(0.05, 1.0);
+            if (!ac && rng.chance(0.3)) j["load"]["time_constant"] = value(rng, rng.log_uniform(1e-6, 100.0), "s");
+            const auto& relays = table().relays;
+            if (rng.chance(0.6)) {
+                j["relay"] = relays[rng.below(relays.size())].record.id;
+                j.erase("coil");  // the record's coil (coil fields beside it would override it)
+            }
+        }
     }
     return j;
 }

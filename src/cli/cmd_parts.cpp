@@ -2,6 +2,7 @@
 #include <fmt/ranges.h>
 
 #include "cli/commands.hpp"
+#include "cli/parts_relays.hpp"
 #include "coilfit/id_match.hpp"
 #include "io/format.hpp"
 #include "io/parts_text.hpp"
@@ -42,7 +43,7 @@ std::string table_text(const std::vector<std::vector<std::string>>& rows) {
 }
 
 // The groups of the listing, in order: title, JSON key, header row.
-enum Group : std::size_t { g_bipolar, g_mosfet, g_array, g_diode, g_zener, g_tvs, g_preset, group_count };
+enum Group : std::size_t { g_bipolar, g_mosfet, g_array, g_diode, g_zener, g_tvs, g_preset, g_relay, group_count };
 struct GroupInfo {
     const char* title;
     const char* json_key;
@@ -57,6 +58,7 @@ const GroupInfo& group_info(Group g) {
         {"Zeners", "zeners", {"id", "Vz", "tolerance", "Pd", "package"}},
         {"TVS", "tvs", {"id", "standoff", "breakdown", "Vc (at Ipp)", "Ppk", "package"}},
         {"Presets", "presets", {"id", "kind", "description"}},
+        {"Relays and contactors", "relays", {"id", "kind", "coil", "form", "AC", "DC", "make"}},
     };
     return info[g];
 }
@@ -125,6 +127,14 @@ std::vector<Entry> all_entries(const io::PartsTable& table) {
         pj["source"] = p.source;
         out.push_back({g_preset, p.kind, p.id, pj, {p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")}});
     }
+    // Relay and contactor records (cli/parts_relays.cpp): one row each, its kind in the second cell.
+    io::Json relays = io::Json::array();
+    std::vector<std::vector<std::string>> rows;
+    list_relays(table, "", "", relays, rows);
+    for (std::size_t i = 0; i < relays.size(); ++i) {
+        const std::vector<std::string>& row = rows[i + 1];
+        out.push_back({g_relay, row[1], row[0], relays[i], row});
+    }
     return out;
 }
 
@@ -136,7 +146,7 @@ std::string kind_word(const std::string& word) {
         {"transistor", "transistor"}, {"npn", "npn"}, {"darlington", "darlington"}, {"nmos", "nmos"}, {"mosfet", "nmos"},
         {"array", "array"}, {"diode", "diode"}, {"rectifier", "rectifier"}, {"fast", "fast"}, {"signal", "signal"},
         {"schottky", "schottky"}, {"schottkie", "schottky"}, {"zener", "zener"}, {"tvs", "tvs"}, {"coil", "coil"}, {"pin", "pin"},
-        {"preset", "preset"}};
+        {"preset", "preset"}, {"relay", "relay"}, {"contactor", "contactor"}};
     for (const auto& [name, kind] : words) {
         if (w == name || w == name + "s" || w == name + "es") return kind;
     }
@@ -152,7 +162,8 @@ bool kind_matches(const Entry& e, const std::string& kind) {
 }
 
 constexpr const char* kind_list =
-    "transistor, npn, darlington, nmos (mosfet), array, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin or preset";
+    "transistor, npn, darlington, nmos (mosfet), array, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, preset, "
+    "relay or contactor";
 
 }  // namespace
 

@@ -2,8 +2,10 @@
 
 #include "cli/commands.hpp"
 #include "coilfit/pick.hpp"
+#include "coilfit/pick_relays.hpp"
 #include "io/format.hpp"
 #include "io/report_io.hpp"
+#include "io/report_pick_relays.hpp"
 
 namespace coilfit::cli {
 namespace {
@@ -218,10 +220,14 @@ int run_pick(const PickOptions& options) {
     style.width = text_width();
     Output out{options.common.output, inputs, {}};
     PickResult result;
+    bool relay_passes = false;  // a relay and driver of the table pass both sides
     if (settings.all_clamps && settings.top == 0) {
         result = run_stream(spec, table, settings, options, style, out);
     } else {
         result = pick(spec, table.catalogue, settings);
+        // A load and no relay: the relays of the table too (src/core/pick_relays.cpp).
+        const RelayPickResult relays = pick_relays(spec, table.catalogue, table.relay_records());
+        relay_passes = !relays.passing.empty();
         if (options.common.format == "json") {
             io::Json j = head_json(spec, settings);
             j["rows"] = result.rows;
@@ -230,13 +236,16 @@ int run_pick(const PickOptions& options) {
             for (const Candidate& c : result.candidates) list.push_back(candidate_json(c, settings.all_clamps));
             j["candidates"] = std::move(list);
             j["reasons"] = result.reasons;
+            if (picks_relays(spec)) j["relays"] = io::relay_pick_to_json(relays);
             out.put(j.dump(2) + "\n");
         } else {
-            out.put(ranked_text(spec, result, options, style));
+            std::string text = ranked_text(spec, result, options, style);
+            if (picks_relays(spec)) text += io::render_relay_pick_text(relays, 3, style.width);
+            out.put(text);
         }
     }
     out.finish();
-    return result.passing > 0 ? exit_pass : exit_fail;
+    return result.passing > 0 || relay_passes ? exit_pass : exit_fail;
 }
 
 }  // namespace coilfit::cli

@@ -77,8 +77,13 @@ constexpr SpecFlag spec_flags[] = {
     {"--frequency", "switching.frequency", "switching frequency, e.g. 1Hz"},
     {"--duty", "switching.duty", "on-time share of the switching period (default 50%)"},
     {"--load-voltage", "load.voltage", "voltage the contacts switch, e.g. 230V"},
-    {"--load-kind", "load.kind", "ac or dc"},
+    {"--load-kind", "load.kind", "kind of load: resistive, inductive, motor, lamp, capacitive, solenoid, transformer (or ac, dc)"},
     {"--load-current", "load.current", "current the contacts switch, e.g. 2A"},
+    {"--relay", "relay", "relay or contactor id from the parts table: fills the coil and the contacts"},
+    {"--load-type", "load.type", "ac or dc: what the contacts switch"},
+    {"--load-inrush", "load.inrush", "the load's inrush, in amperes (48A) or times the steady current (6x)"},
+    {"--load-power-factor", "load.power_factor", "power factor of an AC load, e.g. 0.8"},
+    {"--load-time-constant", "load.time_constant", "L/R of a DC load, e.g. 20ms"},
 };
 constexpr std::size_t spec_flag_count = sizeof(spec_flags) / sizeof(spec_flags[0]);
 

@@ -38,6 +38,7 @@ UnitInfo info(Unit unit) {
     case Unit::kelvin_per_watt: return {"a thermal resistance", "K/W", "_k_per_w", "200K/W"};
     case Unit::per_kelvin: return {"a temperature coefficient", "/K", "_per_k", "0.6%/K"};
     case Unit::volt_per_kelvin: return {"a voltage temperature coefficient", "V/K", "_v_per_k", "-4mV/K"};
+    case Unit::farad: return {"a capacitance", "F", "_f", "100nF"};
     }
     return {"a value", "", "", "1"};
 }

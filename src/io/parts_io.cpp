@@ -80,10 +80,22 @@ const Preset* PartsTable::find_preset(std::string_view kind, std::string_view id
     return it == presets.end() ? nullptr : &*it;
 }
 
+const RelayEntry* PartsTable::find_relay(std::string_view id) const {
+    const auto it = std::find_if(relays.begin(), relays.end(), [&](const RelayEntry& r) { return r.record.id == id; });
+    return it == relays.end() ? nullptr : &*it;
+}
+
+std::vector<RelayRecord> PartsTable::relay_records() const {
+    std::vector<RelayRecord> out;
+    out.reserve(relays.size());
+    for (const RelayEntry& r : relays) out.push_back(r.record);
+    return out;
+}
+
 namespace {
 
 constexpr std::string_view known_kinds =
-    "npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin";
+    "npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor";
 
 Preset read_preset(ObjectReader& r, const Json& record, const std::string& kind, const Origin& origin, const std::string& path) {
     Preset p;
@@ -117,6 +129,7 @@ std::string read_record(ObjectReader& r, const Json& record, const std::string& 
     if (kind == "zener") return cat.zeners.emplace_back(read_zener(r)).id;
     if (kind == "tvs") return cat.tvs.emplace_back(read_tvs(r)).id;
     if (kind == "coil" || kind == "pin") return table.presets.emplace_back(read_preset(r, record, kind, origin, path)).id;
+    if (kind == "relay" || kind == "contactor") return table.relays.emplace_back(read_relay(r, record)).record.id;
     r.fail_at("kind", fmt::format("unknown kind \"{}\"; expected {}", printable(kind), known_kinds));
 }
 
@@ -144,6 +157,7 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
     note_ids(cat.zeners, ids);
     note_ids(cat.tvs, ids);
     note_ids(table.presets, ids);
+    for (const RelayEntry& rel : table.relays) ids[rel.record.id] = "an earlier file";
     for (std::size_t i = 0; i < doc.size(); ++i) {
         const std::string path = "[" + std::to_string(i) + "]";
         ObjectReader r(doc[i], origin, path);

@@ -1,5 +1,6 @@
 #include <cmath>
 
+#include "io/report_contact_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
 
@@ -68,6 +69,7 @@ Json report_to_json(const SizingReport& report) {
     }
     j["driver"] = transistor_kind_name(spec.transistor);
     j["clamp_options"] = options;
+    if (report.contact) j["contact"] = contact_to_json(*report.contact);
     return j;
 }
 

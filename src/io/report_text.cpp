@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include "io/format.hpp"
+#include "io/report_contact_io.hpp"
 #include "io/report_io.hpp"
 #include "io/report_text_parts.hpp"
 
@@ -221,7 +222,7 @@ std::string render_text(const SizingReport& report, const TextStyle& style) {
     out += text::verdict_line(report, style) + "\n";
     out += text::design_section(report, style);
     out += text::checks_section(report, style);
-    // The contact section (contact ratings against the load) goes here, after the checks.
+    out += render_contact_text(report, style);  // the contact ratings against the load
     out += text::inputs_section(report, style);
     out += text::figures_section(report, style);
     out += text::clamp_options_section(report, style);

@@ -172,11 +172,25 @@ void prune_exclusive(SpecDocument& d, const std::string& dotted_path) {
     }
 }
 
+// A relay given by flag replaces the file's coil: the fields that describe the coil itself go
+// (a flag of this run that set one stays); the application's own (self_heating,
+// max_release_time) stay beside the relay.
+void prune_coil_fields(SpecDocument& d) {
+    Json* coil = d.doc.contains("coil") && d.doc["coil"].is_object() ? &d.doc["coil"] : nullptr;
+    if (!coil) return;
+    std::vector<std::string> drop;
+    for (const auto& [key, value] : coil->items()) {
+        if (key != "self_heating" && key != "max_release_time" && d.origin.flags.count("coil." + key) == 0) drop.push_back(key);
+    }
+    for (const auto& key : drop) coil->erase(key);
+}
+
 }  // namespace
 
 void set_field(SpecDocument& d, const std::string& dotted_path, Json value, const std::string& flag) {
     if (dotted_path == "clamp.type" && value.is_string()) prune_clamp_fields(d, value.get<std::string>());
     prune_exclusive(d, dotted_path);
+    if (dotted_path == "relay") prune_coil_fields(d);
     Json* node = &d.doc;
     std::size_t start = 0;
     std::string path;
@@ -215,7 +229,19 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
         (void)top.get("ambient");
         s.defaults_used.push_back(fmt::format("ambient {:g} °C to {:g} °C", s.ambient.min_c, s.ambient.max_c));
     }
-    if (const Json* j = section(top, d, "coil", true)) {
+    if (auto relay = spec_parts::read_relay_field(top, table)) {
+        // The relay's coil fields, then the spec's `coil` fields beside it win.
+        Json merged = relay->coil_fields;
+        if (const Json* j = top.get("coil")) {
+            if (!j->is_object()) fail(d.origin, "coil", "expected an object of coil fields beside relay, got " + describe(*j));
+            if (j->contains("preset")) fail(d.origin, "coil.preset", "given with relay; the relay's record fills the coil");
+            for (const auto& [k, v] : j->items()) merged[k] = v;
+        }
+        ObjectReader r(merged, d.origin, "coil");
+        read_coil(r, s.coil, s.defaults_used);
+        r.finish();
+        s.relay = static_cast<const RelayPart&>(relay->record);
+    } else if (const Json* j = section(top, d, "coil", true)) {
         const Json merged = with_preset(*j, "coil", table, d.origin, "coil");
         ObjectReader r(merged, d.origin, "coil");
         read_coil(r, s.coil, s.defaults_used);

@@ -120,14 +120,64 @@ void read_policy(ObjectReader& r, Spec& s) {
     }
 }
 
-LoadSpec read_load(ObjectReader& r) {
+// load.inrush: amperes ("48A") or a multiple of the steady current ("6x").
+void read_inrush(ObjectReader& r, LoadSpec& load) {
+    const Json* j = r.get("inrush");
+    if (!j) return;
+    if (j->is_string()) {
+        std::string t = j->get<std::string>();
+        if (!t.empty() && (t.back() == 'x' || t.back() == 'X')) {
+            t.pop_back();
+            double m = 0;
+            try {
+                m = parse_quantity(t, Unit::number);
+            } catch (const InputError&) {
+                r.fail_at("inrush", "expected a current such as \"48A\" or a multiple of the steady current such as \"6x\", got " +
+                                        describe(*j));
+            }
+            load.inrush_multiple = r.within("inrush", m, 1.0, 1000.0);
+            return;
+        }
+    }
+    load.inrush_a = r.within("inrush", r.positive("inrush", *r.quantity("inrush", Unit::ampere)), 1e-6, 1e5);
+    if (load.current_a && *load.inrush_a < *load.current_a) {
+        r.fail_at("inrush", fmt::format("expected at least load.current {}, got {}", format_quantity(*load.current_a, Unit::ampere, 6),
+                                        format_quantity(*load.inrush_a, Unit::ampere, 6)));
+    }
+}
+
+LoadSpec read_load(ObjectReader& r, std::vector<std::string>& defaults) {
     LoadSpec load;
     load.voltage_v = r.within("voltage", r.non_negative("voltage", r.required("voltage", Unit::volt)), 0.0, 1e5);
-    const std::string kind = r.text("kind", 16).value_or("ac");
-    if (kind == "ac") load.kind = LoadKind::ac;
-    else if (kind == "dc") load.kind = LoadKind::dc;
-    else r.fail_at("kind", "expected \"ac\" or \"dc\", got \"" + printable(kind) + "\"");
+    const auto type = r.text("type", 16);
+    if (type && *type == "ac") load.kind = LoadKind::ac;
+    else if (type && *type == "dc") load.kind = LoadKind::dc;
+    else if (type) r.fail_at("type", "expected \"ac\" or \"dc\", got \"" + printable(*type) + "\"");
+    if (const auto kind = r.text("kind", 16)) {
+        if (*kind == "ac" || *kind == "dc") {
+            // Edition 1: `kind` was AC or DC.
+            if (type) r.fail_at("kind", "expected the kind of load beside load.type (resistive, inductive, motor, lamp, capacitive, "
+                                        "solenoid or transformer), got \"" + *kind + "\"");
+            load.kind = *kind == "ac" ? LoadKind::ac : LoadKind::dc;
+        } else if (const auto c = load_class_from_name(*kind)) {
+            load.load_class = *c;
+            load.class_given = true;
+            if (!type) defaults.emplace_back("load.type ac");
+        } else {
+            r.fail_at("kind", "expected resistive, inductive, motor, lamp, capacitive, solenoid or transformer (or \"ac\" or "
+                              "\"dc\"), got \"" + printable(*kind) + "\"");
+        }
+    }
     if (auto i = r.quantity("current", Unit::ampere)) load.current_a = r.within("current", r.non_negative("current", *i), 0.0, 1e4);
+    read_inrush(r, load);
+    if (auto v = r.quantity("power_factor", Unit::ratio)) {
+        if (load.kind != LoadKind::ac) r.fail_at("power_factor", "given for a DC load; give load.time_constant (its L/R) instead");
+        load.power_factor = r.fraction("power_factor", r.positive("power_factor", *v), 0.0, 1.0, true);
+    }
+    if (auto v = r.quantity("time_constant", Unit::second)) {
+        if (load.kind != LoadKind::dc) r.fail_at("time_constant", "given for an AC load; give load.power_factor instead");
+        load.time_constant_s = r.within("time_constant", r.positive("time_constant", *v), 1e-6, 100.0);
+    }
     return load;
 }
 
@@ -151,6 +201,16 @@ std::vector<std::string> transistor_ids(const Catalogue& cat) {
     return out;
 }
 
+// The inrush default by kind, noted once the contacts are checked or the kind is given.
+void note_inrush_default(const Spec& s, std::vector<std::string>& defaults) {
+    const LoadSpec& load = *s.load;
+    if (load.inrush_a || load.inrush_multiple || !(load.class_given || s.relay)) return;
+    const InrushDefault d = default_inrush(load.load_class, load.kind == LoadKind::ac);
+    std::string words = fmt::format("load.inrush {:g} x steady for a {} load ({}", d.multiple, load_class_name(load.load_class), d.what);
+    if (d.duration_s > 0) words += ", about " + format_quantity(d.duration_s, Unit::second);
+    defaults.push_back(words + "; common practice, from memory): confirm for the real load");
+}
+
 }  // namespace
 
 Transistor read_transistor_field(ObjectReader& top, const PartsTable& table) {
@@ -158,6 +218,24 @@ Transistor read_transistor_field(ObjectReader& top, const PartsTable& table) {
         top, "transistor", [](const Catalogue& cat, const std::string& id) { return cat.find_transistor(id); },
         [](ObjectReader& r, RecordPlace place) { return read_transistor(r, place); }, "transistor", table, transistor_ids(table.catalogue),
         "transistors");
+}
+
+std::optional<RelayEntry> read_relay_field(ObjectReader& top, const PartsTable& table) {
+    const Json* v = top.get("relay");
+    if (!v) return std::nullopt;
+    if (v->is_string()) {
+        const auto& id = v->get_ref<const Json::string_t&>();
+        if (const RelayEntry* e = table.find_relay(id)) return *e;
+        top.fail_at("relay", fmt::format("no relay or contactor \"{}\" in the parts table ({}); `coilfit parts relay` lists them",
+                                         printable(id), table_size(table)));
+    }
+    if (v->is_object()) {
+        ObjectReader r(*v, top.origin(), top.path_of("relay"));
+        RelayEntry e = read_relay(r, *v, RecordPlace::inline_spec);
+        r.finish();
+        return e;
+    }
+    top.fail_at("relay", "expected a relay id such as a text in quotes, or an inline record, got " + describe(*v));
 }
 
 void read_clamp(ObjectReader& r, Spec& s, const PartsTable& table) {
@@ -245,8 +323,9 @@ void read_operation_sections(ObjectReader& top, const SpecDocument& d, Spec& s) 
     }
     if (const Json* j = top.get("load")) {
         ObjectReader r(*j, d.origin, "load");
-        s.load = read_load(r);
+        s.load = read_load(r, s.defaults_used);
         r.finish();
+        note_inrush_default(s, s.defaults_used);
     }
 }
 
