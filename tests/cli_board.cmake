@@ -78,7 +78,7 @@ coilfit_bad_board(unknown-channel-key
 coilfit_bad_board(channel-negative
   "coilfit: error: channel-negative.json: channels[1].coil.resistance: expected a resistance greater than zero, got -3 Ω")
 coilfit_bad_board(bad-default
-  "coilfit: error: bad-default.json: defaults.clamp.diode: no diode \"1N9999\" in the parts table (8 files); nearest: 1N4937, 1N5819; `coilfit parts diodes` lists them")
+  "coilfit: error: bad-default.json: defaults.clamp.diode: no diode \"1N9999\" in the parts table (9 files); nearest: 1N4937, 1N5819; `coilfit parts diodes` lists them")
 coilfit_bad_board(package-discrete
   "coilfit: error: package-discrete.json: channels[0].package: only a transistor-array channel has a package; this channel's transistor is npn 2N4401")
 coilfit_bad_board(package-overfull

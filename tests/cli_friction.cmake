@@ -53,10 +53,10 @@ friction_case(supply-millivolts 2
 # Ids: case-insensitive when unambiguous; an unknown id lists the nearest.
 friction_case(id-any-case 0 "" ARGS size ${valve} --transistor 2n4401 --diode 1n4148 STDOUT_MATCH "2N4401")
 friction_case(id-nearest 2
-  "coilfit: error: --transistor: no transistor \"2N4400\" in the parts table (8 files); nearest: 2N4401, 2N7000, 2N3904; `coilfit parts transistors` lists them"
+  "coilfit: error: --transistor: no transistor \"2N4400\" in the parts table (9 files); nearest: 2N4401, 2N7000, 2N3904; `coilfit parts transistors` lists them"
   ARGS size ${valve} --transistor 2N4400)
 friction_case(id-nothing-near 2
-  "coilfit: error: --diode: no diode \"XYZ\" in the parts table (8 files); `coilfit parts diodes` lists them"
+  "coilfit: error: --diode: no diode \"XYZ\" in the parts table (9 files); `coilfit parts diodes` lists them"
   ARGS size ${valve} --diode XYZ)
 friction_case(parts-unknown 2 "coilfit: error: parts: no part or preset \"2N9999\" in the table; nearest: 2N3904" ARGS parts 2N9999)
 friction_case(parts-any-case 0 "" ARGS parts 2n4401 STDOUT_MATCH "^2N4401 \\(npn\\)\n")

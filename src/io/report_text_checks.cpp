@@ -14,7 +14,7 @@ namespace {
 // What each check compares, in a few words (the message has the whole story).
 std::string compared(const Check& c, const Spec& spec) {
     const bool mos = spec.mosfet() != nullptr;
-    static const std::array<std::pair<std::string_view, std::string_view>, 16> words{{
+    static const std::array<std::pair<std::string_view, std::string_view>, 21> words{{
         {"coil.operate", "coil voltage vs must-operate"},
         {"coil.overvoltage", "coil voltage vs coil max"},
         {"coil.thermal", "winding vs insulation limit"},
@@ -31,6 +31,11 @@ std::string compared(const Check& c, const Spec& spec) {
         {"gate.drive", "gate voltage vs Rds(on) test Vgs"},
         {"gate.voltage", "gate voltage vs Vgs max"},
         {"input.drive", "input voltage vs input-on level"},
+        {"contact.voltage", "load voltage vs contact rating"},
+        {"contact.current", "load current vs contact rating"},
+        {"contact.inrush", "inrush vs contact making rating"},
+        {"contact.breaking", "DC current vs breaking curve"},
+        {"contact.min_load", "load vs contacts' minimum load"},
     }};
     if (c.id == "transistor.current") return mos ? "coil current vs derated Id max" : "coil current vs derated Ic max";
     if (c.id == "transistor.voltage") return mos ? "peak drain voltage vs Vds max" : "peak collector voltage vs Vceo";
@@ -60,9 +65,24 @@ std::string skip_words(const Check& c) {
 
 // What a failing or warning check says to change: its message after the comparison ("...
 // against 8 mA: use a smaller base resistor" gives "use a smaller base resistor").
+// Only a colon outside parentheses counts: "(beyond the part's data: ...)" is a remark, not the fix.
 std::string fix_words(const Check& c) {
-    const auto colon = c.message.find(": ");
-    return colon == std::string::npos ? c.message : c.message.substr(colon + 2);
+    int depth = 0;
+    for (std::size_t i = 0; i + 1 < c.message.size(); ++i) {
+        const char ch = c.message[i];
+        if (ch == '(') ++depth;
+        else if (ch == ')' && depth > 0) --depth;
+        else if (ch == ':' && c.message[i + 1] == ' ' && depth == 0) return c.message.substr(i + 2);
+    }
+    return {};
+}
+
+// The line under a failing or warning row: what to change, else (a warning with nothing to
+// change, e.g. data beyond the part's range) what was found.
+std::string fix_line(const Check& c, std::size_t width, std::size_t indent) {
+    const std::string fix = fix_words(c);
+    if (!fix.empty()) return "fix: " + wrap(fix, width, indent + 5);
+    return "found: " + wrap(c.message, width, indent + 7);
 }
 
 struct Row {
@@ -95,14 +115,14 @@ std::string stacked(const std::vector<Row>& rows, const TextStyle& style) {
                                              r.margin.empty() ? "" : ", margin " + r.margin),
                              style.width, 4) + "\n";
         }
-        if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) out += "    fix: " + wrap(fix_words(c), style.width, 9) + "\n";
+        if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) out += "    " + fix_line(c, style.width, 4) + "\n";
     }
     return out;
 }
 
 }  // namespace
 
-bool in_checks_table(const Check& c) { return c.id.rfind("contact.", 0) != 0; }
+bool in_checks_table(const Check&) { return true; }
 
 std::string margin_text(const Check& c) {
     if (!c.margin) return "";
@@ -142,7 +162,7 @@ std::string checks_section(const SizingReport& report, const TextStyle& style) {
         else line += "\n" + std::string(indent, ' ') + wrap(r.what, style.width, indent);
         out += line + "\n";
         if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) {
-            out += std::string(indent, ' ') + "fix: " + wrap(fix_words(c), style.width, indent + 5) + "\n";
+            out += std::string(indent, ' ') + fix_line(c, style.width, indent) + "\n";
         }
     }
     return out + "\n";
