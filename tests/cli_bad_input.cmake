@@ -25,7 +25,7 @@ coilfit_bad_input(binary-garbage-on-stdin
   "coilfit: error: <stdin>:1:1: not valid JSON: invalid literal"
   ARGS size - INPUT garbage.bin)
 coilfit_bad_input(unknown-key
-  "coilfit: error: unknown-key.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, pulldown, schema, supply, switching, transistor)"
+  "coilfit: error: unknown-key.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, pulldown, relay, schema, supply, switching, transistor)"
   ARGS size unknown-key.json)
 coilfit_bad_input(unknown-schema
   "coilfit: error: unknown-schema.json: schema: expected \"coilfit.spec/1\" (the schema this coilfit reads), got \"coilfit.spec/2\""
@@ -54,3 +54,21 @@ coilfit_bad_input(flags-only-names-the-missing-flag
 coilfit_bad_input(flags-only-missing-section
   "coilfit: error: command line: supply.voltage: missing; expected a voltage such as \"12V\" (give --supply)"
   ARGS size --coil-resistance 400R)
+
+# Hostile input (issue 17): what would mislead when echoed raw is shown escaped (\u202e, \u00a0,
+# \u200b), bidi controls are refused in names, lengths count characters (201 two-byte "é").
+coilfit_bad_input(bidi-name-in-spec
+  "coilfit: error: bidi-name.json: name: expected a text without bidirectional controls, got \"lab valve \\u202eV3\""
+  ARGS size bidi-name.json)
+coilfit_bad_input(bidi-name-flag
+  "coilfit: error: --name: expected a text without bidirectional controls, got \"K2\\u202e evil\""
+  ARGS size lab-valve.json "--name=K2‮ evil")
+coilfit_bad_input(no-break-space-in-value
+  "coilfit: error: --supply: expected a voltage such as \"12V\", got \"24\\u00a0V\""
+  ARGS size lab-valve.json "--supply=24 V")
+coilfit_bad_input(zero-width-space-in-id
+  "coilfit: error: invisible-id.json: [0].id: expected an id without invisible characters, got \"DT1\\u200b\""
+  ARGS size lab-valve.json --parts invisible-id.json)
+coilfit_bad_input(name-length-in-characters
+  "coilfit: error: --name: expected a text of at most 200 characters, got 201"
+  ARGS size lab-valve.json "--name=ééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééééé")

@@ -11,6 +11,12 @@ foreach(example greenhouse-valve)
   set_tests_properties(cli.netlist.ngspice.${example} PROPERTIES ENVIRONMENT "COILFIT_PARTS=${COILFIT_PARTS_DIR}")
 endforeach()
 
+# One channel of a transistor array: its input resistor and a Darlington pair, the built-in diode.
+add_test(NAME cli.netlist.ngspice.array-channel
+         COMMAND ${CMAKE_COMMAND} -DCOILFIT=${COILFIT_EXE} -DSPEC=${CMAKE_CURRENT_SOURCE_DIR}/data/array_valve.json
+                 -DOUT=${netlist_dir}/array-channel.cir -P ${netlist_case})
+set_tests_properties(cli.netlist.ngspice.array-channel PROPERTIES ENVIRONMENT "COILFIT_PARTS=${COILFIT_PARTS_DIR}")
+
 # Without the coil inductance there is nothing to simulate: bad usage (exit 2), nothing written.
 add_test(NAME cli.netlist.needs-inductance
          COMMAND ${CMAKE_COMMAND}

@@ -168,7 +168,7 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("schema", 1), 2, R"(spec.json: schema: expected "coilfit.spec/1" (the schema this coilfit reads), got 1)"},
         {S, spec_with("suply", io::Json::object()), 2,
          "spec.json: suply: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, policy, "
-         "pulldown, schema, supply, switching, transistor)"},
+         "pulldown, relay, schema, supply, switching, transistor)"},
         {S, spec_with("coil.resistence", "400R"), 2,
          "spec.json: coil.resistence: unknown key (expected one of: inductance, max_release_time, max_temperature, max_voltage, must_operate, "
          "must_operate_temp, must_release, preset, rated_voltage, reference_temp, resistance, self_heating, "
@@ -189,7 +189,7 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: supply.voltage: expected a voltage such as "12V", got "24A" (a current))"},
         {S, spec_with("supply.voltage", -24), 2, "spec.json: supply.voltage: expected a voltage greater than zero, got -24 V"},
         {S, spec_with("supply.voltage", "0V"), 2, "spec.json: supply.voltage: expected a voltage greater than zero, got 0 V"},
-        {S, spec_with("supply.voltage", "2kV"), 2, "spec.json: supply.voltage: expected a voltage from 100 mV to 1 kV, got 2 kV"},
+        {S, spec_with("supply.voltage", "2kV"), 2, "spec.json: supply.voltage: 2 kV is not a plausible coil supply voltage (100 mV to 1 kV); did you mean 2000mV?"},
         {S, spec_with("supply.tolerance", "100%"), 2, "spec.json: supply.tolerance: expected a ratio from 0 % to 50 %, got 100 %"},
         {S, spec_with("supply.tolerance", 10), 2,
          R"(spec.json: supply.tolerance: expected a ratio from 0 % to 50 %, got 1000 % (a plain number is a fraction: write "10%" or 0.1))"},
@@ -229,7 +229,7 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("coil", io::Json{{"preset", 5}}), 2, "spec.json: coil.preset: expected a preset id in quotes, got 5"},
         // Pin.
         {S, spec_with("pin.vdd", "0V"), 2, "spec.json: pin.vdd: expected a voltage greater than zero, got 0 V"},
-        {S, spec_with("pin.vdd", "100V"), 2, "spec.json: pin.vdd: expected a voltage from 500 mV to 60 V, got 100 V"},
+        {S, spec_with("pin.vdd", "100V"), 2, "spec.json: pin.vdd: 100 V is not a plausible logic pin voltage (500 mV to 60 V)"},
         {S, spec_with("pin.max_current", "0A"), 2, "spec.json: pin.max_current: expected a current greater than zero, got 0 A"},
         {S, spec_with("pin.vdd_tolerance", "60%"), 2, "spec.json: pin.vdd_tolerance: expected a ratio from 0 % to 50 %, got 60 %"},
         {S, with(spec_with("pin.voh", "5V"), "pin.voh_current", "8mA"), 2, "spec.json: pin.voh: expected at most pin.vdd 3.3 V, got 5 V"},
@@ -237,7 +237,7 @@ std::vector<BadInput> spec_rows() {
          R"(spec.json: pin.voh_current: missing; pin.voh needs the current it is rated at, such as "8mA")"},
         // Parts named by the spec.
         {S, spec_with("transistor", "2N9999"), 2,
-         "spec.json: transistor: no transistor \"2N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
+         "spec.json: transistor: no transistor \"2N9999\" in the parts table (" + files + "); nearest: 2N3904; `coilfit parts transistors` lists them"},
         {S, spec_with("transistor", 42), 2,
          "spec.json: transistor: expected transistor id such as a text in quotes, or an inline record, got 42"},
         {S, spec_with("transistor", with_json(good_npn, "vceo", nullptr)), 2,
@@ -256,7 +256,7 @@ std::vector<BadInput> spec_rows() {
         {S, with(spec_with("clamp.type", "diode_resistor"), "clamp.resistor", "0R"), 2,
          "spec.json: clamp.resistor: expected a resistance greater than zero, got 0 Ω"},
         {S, spec_with("clamp.diode", "1N9999"), 2,
-         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (" + files + "); `coilfit parts` lists it"},
+         "spec.json: clamp.diode: no diode \"1N9999\" in the parts table (" + files + "); nearest: 1N4937, 1N5819; `coilfit parts diodes` lists them"},
         // Base resistor, pull-down, policy.
         {S, spec_with("base_resistor.series", "E7"), 2,
          R"(spec.json: base_resistor.series: expected one of E3, E6, E12, E24, E48, E96, E192, got "E7")"},
@@ -280,7 +280,7 @@ std::vector<BadInput> spec_rows() {
         {S, spec_with("policy.vbe_low", "3V"), 2, "spec.json: policy.vbe_low: expected a voltage from 0 V to 2 V, got 3 V"},
         {S, spec_with("switching.frequency", "-1Hz"), 2,
          "spec.json: switching.frequency: expected a frequency greater than zero, got -1 Hz"},
-        {S, spec_with("load.kind", "mains"), 2, R"(spec.json: load.kind: expected "ac" or "dc", got "mains")"},
+        {S, spec_with("load.kind", "mains"), 2, R"(spec.json: load.kind: expected resistive, inductive, motor, lamp, capacitive, solenoid or transformer (or "ac" or "dc"), got "mains")"},
         {S, spec_with("load.voltage", "-5V"), 2, "spec.json: load.voltage: expected a voltage of zero or more, got -5 V"},
         // Texts.
         {S, spec_with("name", "valve \x1b[31mK2"), 2,
@@ -299,11 +299,11 @@ std::vector<BadInput> parts_rows() {
         {P, "{}", 2, "parts/test.json: expected a JSON list [ ... ] of part records, got an object"},
         {P, "[1]", 2, "parts/test.json: [0]: expected a JSON object { ... }, got 1"},
         {P, table_of(with(good_npn, "kind", nullptr)), 2,
-         "parts/test.json: [0].kind: missing; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
+         "parts/test.json: [0].kind: missing; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor"},
         {P, table_of(with(good_npn, "kind", "triode")), 2,
-         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin"},
+         "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor"},
         {P, table_of(with(good_npn, "kind", 3)), 2,
-         "parts/test.json: [0].kind: expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin, got 3"},
+         "parts/test.json: [0].kind: expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor, got 3"},
         {P, table_of(with(good_npn, "id", "")), 2, R"(parts/test.json: [0].id: expected an id such as "2N4401", got an empty text)"},
         {P, table_of(with(good_npn, "id", " QT1")), 2, R"(parts/test.json: [0].id: expected an id without spaces at either end, got " QT1")"},
         {P, table_of(with(good_npn, "id", "Q\x07")), 2, R"(parts/test.json: [0].id: expected a text without control characters, got "Q\x07")"},
@@ -352,7 +352,7 @@ std::vector<BadInput> flag_rows() {
         {F, "zener", 2, R"(--clamp: expected "diode", "diode_zener", "diode_resistor", "diode_tvs" or "none", got "zener")", "clamp.type", "--clamp"},
         {F, "K2 \x1b[2J", 2, R"(--name: expected a text without control characters, got "K2 \x1b[2J")", "name", "--name"},
         {F, "K2 \xff\xfe", 2, R"(--name: expected UTF-8 text, got "K2 \xff\xfe")", "name", "--name"},
-        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts` lists it", "transistor",
+        {F, "NOPE", 2, R"(--transistor: no transistor "NOPE" in the parts table ()" + files + "); `coilfit parts transistors` lists them", "transistor",
          "--transistor"},
         {F, "120%", 2, "--must-operate: expected a ratio from 0 % to 100 %, got 120 %", "coil.must_operate", "--must-operate"},
         {F, "0", 2, "--overdrive: expected a number greater than zero, got 0", "policy.overdrive", "--overdrive"},

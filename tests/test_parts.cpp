@@ -184,7 +184,7 @@ TEST_SUITE("parts") {
         typo.replace(typo.find("\"pd\""), 4, "\"pdd\"");
         CHECK_THROWS_AS(parse(typo), InputError);
         CHECK_THROWS_WITH_AS(parse("[{ \"id\": \"X\", \"kind\": \"triode\" }]"),
-                             "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin",
+                             "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor",
                              InputError);
     }
 

@@ -33,7 +33,7 @@ TEST_SUITE("pick") {
         for (const char* example : {"greenhouse-valve.json", "garage-door.json", "dust-extractor.json"}) {
             CAPTURE(example);
             const Setup s = load(example);
-            const PickResult result = pick(s.spec, s.table.catalogue);
+            const PickResult result = pick(s.spec, s.table.catalogue, PickSettings{0, true});
             // Every transistor of every driver kind with every diode; an array channel with its own diode.
             const Catalogue& cat = s.table.catalogue;
             CHECK(result.candidates.size() == (cat.bipolars.size() + cat.mosfets.size()) * cat.diodes.size() + cat.arrays.size());
@@ -89,6 +89,59 @@ TEST_SUITE("pick") {
                 CHECK(a.worst_margin >= b.worst_margin);
             }
         }
+    }
+
+    TEST_CASE("one row per transistor: its best diode, the rows and counts of every pair behind it") {
+        for (const char* example : {"greenhouse-valve.json", "garage-door.json", "dust-extractor.json"}) {
+            CAPTURE(example);
+            const Setup s = load(example);
+            const Catalogue& cat = s.table.catalogue;
+            const PickResult rows = pick(s.spec, cat);
+            const PickResult pairs = pick(s.spec, cat, PickSettings{0, true});
+            CHECK(rows.candidates.size() == cat.bipolars.size() + cat.mosfets.size() + cat.arrays.size());
+            CHECK(rows.evaluations == pairs.candidates.size());
+            for (const Candidate& row : rows.candidates) {
+                CAPTURE(row.transistor);
+                // The row is the first of its transistor's pairs in the full ranking.
+                const auto first = std::find_if(pairs.candidates.begin(), pairs.candidates.end(),
+                                                [&](const Candidate& p) { return p.transistor == row.transistor; });
+                REQUIRE(first != pairs.candidates.end());
+                CHECK(first->diode == row.diode);
+                CHECK(first->verdict == row.verdict);
+                const auto n = std::count_if(pairs.candidates.begin(), pairs.candidates.end(),
+                                             [&](const Candidate& p) { return p.transistor == row.transistor; });
+                const auto passing = std::count_if(pairs.candidates.begin(), pairs.candidates.end(), [&](const Candidate& p) {
+                    return p.transistor == row.transistor && p.verdict == Verdict::pass;
+                });
+                CHECK(row.clamps_tried == static_cast<std::size_t>(n));
+                CHECK(row.clamps_passing == static_cast<std::size_t>(passing));
+            }
+        }
+    }
+
+    TEST_CASE("--top keeps the best N of the full ranking, and streaming hands over every pair") {
+        const Setup s = load("garage-door.json");
+        const Catalogue& cat = s.table.catalogue;
+        const PickResult all = pick(s.spec, cat, PickSettings{0, true});
+        for (const std::size_t top : {std::size_t{1}, std::size_t{7}, std::size_t{40}, all.candidates.size() + 5}) {
+            CAPTURE(top);
+            const PickResult best = pick(s.spec, cat, PickSettings{top, true});
+            REQUIRE(best.candidates.size() == std::min(top, all.candidates.size()));
+            CHECK(best.rows == all.candidates.size());
+            for (std::size_t i = 0; i < best.candidates.size(); ++i) {
+                CHECK(best.candidates[i].transistor == all.candidates[i].transistor);
+                CHECK(best.candidates[i].diode == all.candidates[i].diode);
+            }
+        }
+        std::size_t streamed = 0;
+        std::size_t passing = 0;
+        const PickResult counts = pick_each(s.spec, cat, PickSettings{0, true}, [&](const Candidate& c) {
+            ++streamed;
+            passing += c.verdict == Verdict::pass ? 1U : 0U;
+        });
+        CHECK(counts.candidates.empty());
+        CHECK(streamed == all.candidates.size());
+        CHECK(counts.passing == passing);
     }
 
     TEST_CASE("the ranking is deterministic") {

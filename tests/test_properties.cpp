@@ -83,7 +83,9 @@ io::Json random_spec(Random& rng) {
     io::Json coil;
     const double rated = rng.log_uniform(0.1, 1000.0);
     coil["rated_voltage"] = value(rng, rated, "V");
-    coil["resistance"] = value(rng, rng.log_uniform(0.01, 1e7), "R");
+    // Within the plausible ranges (src/io/plausible.cpp): 1 Ω to 200 kΩ, and a rated current of
+    // 100 µA to 20 A.
+    coil["resistance"] = value(rng, rng.log_uniform(std::max(1.0, rated / 20.0), std::min(200e3, rated / 1e-4)), "R");
     if (rng.chance(0.7)) coil["tolerance"] = percent(rng, rng.uniform(0.0, 0.5));
     if (rng.chance(0.5)) coil["reference_temp"] = value(rng, rng.uniform(-55.0, 125.0), "C");
     const double operate = rng.uniform(0.11, 1.0);  // above the default must_release 10 %
@@ -99,10 +101,10 @@ io::Json random_spec(Random& rng) {
     const double vdd = rng.uniform(0.5, 60.0);
     pin["vdd"] = value(rng, vdd, "V");
     if (rng.chance(0.7)) pin["vdd_tolerance"] = percent(rng, rng.uniform(0.0, 0.5));
-    pin["max_current"] = value(rng, rng.log_uniform(1e-6, 10.0), "A");
+    pin["max_current"] = value(rng, rng.log_uniform(1e-6, 0.2), "A");  // a plausible pin current
     if (rng.chance(0.5)) {
         pin["voh"] = value(rng, vdd * rng.uniform(0.01, 1.0), "V");
-        pin["voh_current"] = value(rng, rng.log_uniform(1e-6, 10.0), "A");
+        pin["voh_current"] = value(rng, rng.log_uniform(1e-6, 0.2), "A");
     }
     j["pin"] = pin;
     j["transistor"] = cat.bipolars[rng.below(cat.bipolars.size())].id;
@@ -111,7 +113,7 @@ io::Json random_spec(Random& rng) {
     switch (rng.below(4)) {
     case 0: clamp = {{"type", "diode"}, {"diode", diode}}; break;
     case 1: clamp = {{"type", "diode_zener"}, {"diode", diode}, {"zener", cat.zeners[rng.below(cat.zeners.size())].id}}; break;
-    case 2: clamp = {{"type", "diode_resistor"}, {"diode", diode}, {"resistor", value(rng, rng.log_uniform(0.01, 1e6), "R")}}; break;
+    case 2: clamp = {{"type", "diode_resistor"}, {"diode", diode}, {"resistor", value(rng, rng.log_uniform(1.0, 1e6), "R")}}; break;
     default: clamp = {{"type", "none"}}; break;
     }
     j["clamp"] = clamp;
@@ -120,10 +122,10 @@ io::Json random_spec(Random& rng) {
         io::Json rb = {{"series", series[rng.below(7)]}};
         if (rng.chance(0.5)) rb["tolerance"] = percent(rng, rng.uniform(0.0, 0.5));
         if (rng.chance(0.5)) rb["power_rating"] = value(rng, rng.log_uniform(1e-3, 100.0), "W");
-        if (rng.chance(0.2)) rb["value"] = value(rng, rng.log_uniform(0.1, 1e9), "R");
+        if (rng.chance(0.2)) rb["value"] = value(rng, rng.log_uniform(10.0, 1e7), "R");
         j["base_resistor"] = rb;
     }
-    if (rng.chance(0.5)) j["pulldown"] = value(rng, rng.log_uniform(1.0, 1e9), "R");
+    if (rng.chance(0.5)) j["pulldown"] = value(rng, rng.log_uniform(100.0, 1e8), "R");
     if (rng.chance(0.7)) {
         io::Json p;
         if (rng.chance(0.5)) p["forced_gain"] = rng.log_uniform(0.1, 1e5);
@@ -154,6 +156,21 @@ io::Json random_spec(Random& rng) {
     if (rng.chance(0.5)) {
         j["load"] = {{"voltage", value(rng, rng.uniform(0.0, 1e5), "V")}, {"kind", rng.chance(0.5) ? "ac" : "dc"}};
         if (rng.chance(0.5)) j["load"]["current"] = value(rng, rng.uniform(0.0, 1e4), "A");
+        if (rng.chance(0.5)) {
+            // Edition 2: the kind of load, its inrush, power factor or L/R, and a relay record.
+            constexpr const char* kinds[] = {"resistive", "inductive", "motor", "lamp", "capacitive", "solenoid", "transformer"};
+            const bool ac = j["load"]["kind"] == "ac";
+            j["load"]["type"] = ac ? "ac" : "dc";
+            j["load"]["kind"] = kinds[rng.below(7)];
+            if (rng.chance(0.3)) j["load"]["inrush"] = std::to_string(rng.uniform(1.0, 100.0)) + "x";
+            if (ac && rng.chance(0.3)) j["load"]["power_factor"] = rng.uniform(0.05, 1.0);
+            if (!ac && rng.chance(0.3)) j["load"]["time_constant"] = value(rng, rng.log_uniform(1e-6, 100.0), "s");
+            const auto& relays = table().relays;
+            if (rng.chance(0.6)) {
+                j["relay"] = relays[rng.below(relays.size())].record.id;
+                j.erase("coil");  // the record's coil (coil fields beside it would override it)
+            }
+        }
     }
     return j;
 }
@@ -222,7 +239,7 @@ TEST_SUITE("properties") {
             CHECK_FALSE(shows_non_finite(io::render_text(report, io::TextStyle{})));
             if (i % 100 == 0) {
                 // pick sizes the spec with every part of the table: its figures stay finite too.
-                const PickResult picked = pick(spec, table().catalogue);
+                const PickResult picked = pick(spec, table().catalogue, PickSettings{0, true});
                 for (const Candidate& c : picked.candidates) {
                     CHECK(std::isfinite(c.worst_margin));
                     CHECK((!c.resistor_ohm || std::isfinite(*c.resistor_ohm)));

@@ -300,7 +300,10 @@ TEST_SUITE("sizing") {
 
     TEST_CASE("the report lists the defaults-independent notes and the cautions") {
         Spec s = hand_spec();
-        s.load = LoadSpec{230.0, LoadKind::ac, 2.0};
+        s.load = LoadSpec{};
+        s.load->voltage_v = 230.0;
+        s.load->kind = LoadKind::ac;
+        s.load->current_a = 2.0;
         const SizingReport r = size(s, Catalogue{});
         bool mains = false;
         for (const auto& c : r.cautions) mains = mains || c.find("local electrical codes and licensed practice") != std::string::npos;
@@ -372,6 +375,30 @@ TEST_SUITE("sizing") {
         no_clamp.clamp.type = ClampType::none;
         no_clamp.clamp.diode.reset();
         specs.push_back(no_clamp);
+        // The contact stage (src/method.md "Contact side"): the same verdicts in every mode, a
+        // passing, a warning (slow release, minimum load) and a failing set.
+        Spec contacts = base;
+        contacts.load = LoadSpec{};
+        contacts.load->kind = LoadKind::dc;
+        contacts.load->voltage_v = 24.0;
+        contacts.load->current_a = 8.0;
+        contacts.load->load_class = LoadClass::motor;
+        contacts.load->class_given = true;
+        RelayPart relay;
+        relay.id = "TEST-RELAY";
+        relay.contacts = Contacts{};
+        relay.contacts->dc = ContactRating{30.0, 10.0};
+        relay.contacts->dc_breaking = {{30.0, 10.0}, {60.0, 1.0}};
+        relay.contacts->make_current_a = 60.0;
+        relay.contacts->min_load = ContactRating{5.0, 0.1};
+        contacts.relay = relay;
+        specs.push_back(contacts);
+        Spec contacts_low = contacts;
+        contacts_low.load->current_a = 0.05;
+        specs.push_back(contacts_low);
+        Spec contacts_high = contacts;
+        contacts_high.load->voltage_v = 61.0;
+        specs.push_back(contacts_high);
         int rate_verdicts[2] = {0, 0};  // rate checks seen passing, failing in verdicts mode
         Evaluation reused;
         for (Spec& spec : specs) {

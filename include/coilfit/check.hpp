@@ -44,11 +44,18 @@ enum class CheckId : std::uint8_t {
     contact_inrush,
     contact_breaking,
     contact_min_load,
+    // edition 2, a board's shared limits (src/method.md "Boards"): worked out over the channels
+    // of a board, never by one channel's evaluation (which leaves them skipped)
+    port_current,
+    package_current,
+    supply_current,
+    array_power,
+    array_current,
 };
-inline constexpr std::size_t check_count = 23;
+inline constexpr std::size_t check_count = 28;
 
-// The stage whose file computes and words a check.
-enum class Stage : std::uint8_t { coil, driver, clamp, timing, contact };
+// The stage whose file computes and words a check (board: src/core/board*.cpp).
+enum class Stage : std::uint8_t { coil, driver, clamp, timing, contact, board };
 
 struct CheckInfo {
     CheckId id;

@@ -35,6 +35,7 @@ enum class Unit {
     kelvin_per_watt,  // thermal resistance ("200K/W", "200°C/W")
     per_kelvin,       // a relative temperature coefficient ("0.6%/K", 0.006)
     volt_per_kelvin,  // a voltage temperature coefficient ("-4mV/K", "2mV/°C")
+    farad,            // a capacitance (printing only; not parsed)
 };
 
 // "a voltage", "a current", ... for messages.

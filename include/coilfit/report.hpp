@@ -13,6 +13,7 @@
 #include "coilfit/quantity.hpp"
 #include "coilfit/sizing.hpp"
 #include "coilfit/spec.hpp"
+#include "coilfit/transient.hpp"
 
 namespace coilfit {
 
@@ -61,6 +62,22 @@ struct ClampOption {
     std::string failed_check;         // the first check this option fails, if any
     Verdict pulse_verdict = Verdict::skip;  // clamp.pulse of a zener or TVS option
     bool chosen = false;              // the clamp the spec uses
+    std::optional<TurnOff> turn_off;  // its decay for the plot (with an inductance and a clamp)
+};
+
+// The contact side of the report (src/method.md "Contact side"): what the contacts switch, the
+// inrush taken, and the suppression advice with its values.
+struct ContactReport {
+    std::string relay;  // "pcb-power-relay-12v-16a (relay, 1 form A)", or "none given"
+    std::string load;   // "24 V DC motor, 8 A steady"
+    std::optional<double> inrush_a;
+    std::string inrush_words;  // how the inrush was found ("6 x steady, the default for a motor ...")
+    std::vector<std::string> suppression;  // advice, one line each
+    std::optional<double> snubber_capacitance_f, snubber_resistance_ohm;  // AC inductive load
+    std::optional<double> varistor_voltage_v;                             // AC inductive load
+    // A DC load of several amperes with a plain-diode coil clamp: the release times side by side.
+    std::optional<double> release_plain_s, release_zener_s;
+    std::string zener_option;  // the clamp option the zener time is for
 };
 
 struct SizingReport {
@@ -72,6 +89,7 @@ struct SizingReport {
     std::vector<QuantityEntry> quantities;
     std::vector<Check> checks;
     std::vector<ClampOption> clamp_options;
+    std::optional<ContactReport> contact;  // when the spec names a relay or a kind of load
     std::vector<std::string> notes;
     std::vector<std::string> cautions;
 

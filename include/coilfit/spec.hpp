@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "coilfit/contact.hpp"
 #include "coilfit/defaults.hpp"
 #include "coilfit/eseries.hpp"
 #include "coilfit/parts.hpp"
@@ -50,6 +51,11 @@ struct CoilSpec {
     std::optional<double> inductance_h;  // energised (armature closed) inductance
     std::optional<double> max_voltage_v;
     std::optional<double> max_release_time_s;
+};
+
+// A relay or contactor of the parts table: its coil and its contacts (pick tries them).
+struct RelayRecord : RelayPart {
+    CoilSpec coil;
 };
 
 struct PinSpec {
@@ -104,10 +110,18 @@ struct SwitchingSpec {
     double duty = defaults::switching_duty;
 };
 
+// What the contacts switch (src/method.md "Contact side"). `kind` is AC or DC (the spec's
+// `type`, or an edition-1 `kind` of "ac"/"dc"); `load_class` the spec's `kind` of load.
 struct LoadSpec {
-    double voltage_v = 0;
+    double voltage_v = 0;  // RMS for AC
     LoadKind kind = LoadKind::ac;
-    std::optional<double> current_a;
+    std::optional<double> current_a;  // steady
+    LoadClass load_class = LoadClass::resistive;
+    bool class_given = false;               // the spec named the kind of load (edition 2)
+    std::optional<double> inrush_a;         // given in amperes
+    std::optional<double> inrush_multiple;  // given as a multiple of the steady current ("6x")
+    std::optional<double> power_factor;     // AC
+    std::optional<double> time_constant_s;  // DC: the load's L/R
 };
 
 struct Spec {
@@ -124,6 +138,7 @@ struct Spec {
     Policy policy;
     SwitchingSpec switching;
     std::optional<LoadSpec> load;
+    std::optional<RelayPart> relay;  // the relay or contactor record the coil came from, with its contacts
     // Defaults the loader filled in, one phrase each ("supply.tolerance 10 %"), for the notes.
     // Words for people only: the core never reads them (it sees the optional fields).
     std::vector<std::string> defaults_used;

@@ -11,6 +11,7 @@
 
 #include "cli/help.hpp"
 #include "cli/spec_flags.hpp"
+#include "io/json_read.hpp"
 
 namespace coilfit::cli {
 namespace {
@@ -34,11 +35,17 @@ CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
             }
             if (!digits || overflow || v < min || v > max) {
                 return "expected a whole number from " + std::to_string(min) + " to " + std::to_string(max) +
-                       ", got \"" + s + "\"";
+                       ", got \"" + io::printable(s) + "\"";
             }
             return std::string();
         },
         "");
+}
+
+// A file name: anything but an empty text (an empty --parts must not fall back to the default).
+CLI::Validator file_name() {
+    return CLI::Validator(
+        [](std::string& s) { return s.empty() ? std::string("expected a file name, got an empty text") : std::string(); }, "");
 }
 
 // One of a few words, in our wording ("expected text or json, got \"xml\"").
@@ -75,11 +82,21 @@ void add_spec_options(CLI::App& app, SpecOptions& options) {
             options.flag_of.emplace_back(path, flag);
         });
     }
+    // Unsetting from the command line: the file's pull-down (or a preset's) is removed.
+    app.add_flag_callback(
+           "--no-pulldown",
+           [&options] {
+               options.values.emplace_back("pulldown", "none");
+               options.flag_of.emplace_back("pulldown", "--no-pulldown");
+           },
+           "no base-emitter pull-down, whatever the file gives (a bipolar driver's; an nmos gate keeps one)")
+        ->group(std::string(spec_flag_group("pulldown")));
 }
 
 void add_common_options(CLI::App& app, CommonOptions& options, bool with_output) {
-    app.add_option("--parts", options.parts_path, "parts table file or folder")
+    app.add_option("--parts", options.parts_path, "parts table file or folder (never empty)")
         ->group(general_group)
+        ->check(file_name())
         ->type_name("PATH")
         ->default_str("$COILFIT_PARTS, else the installed table");
     app.add_option("--format", options.format, "output format")
@@ -88,9 +105,12 @@ void add_common_options(CLI::App& app, CommonOptions& options, bool with_output)
         ->default_str("text")
         ->check(one_of({"text", "json"}));
     if (with_output) {
-        app.add_option("-o,--output", options.output, "write to FILE (atomically) instead of standard output")
+        app.add_option("-o,--output", options.output,
+                       "write to FILE instead of standard output (- is standard output; a file is replaced atomically, "
+                       "a device or FIFO written; never an input of the run)")
             ->group(general_group)
-            ->type_name("FILE");
+            ->type_name("FILE")
+            ->check(file_name());
     }
 }
 
@@ -99,9 +119,18 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
                                        "Size and check one driver channel at worst case. Flags override the "
                                        "spec file's fields; without a file they give the whole spec.");
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)")->group("Size");
-    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE")
+    cmd->add_flag("--brief", options.brief, "text: only the verdict, the design and the failing or warning checks")
+        ->group("Size");
+    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
         ->group("Size")
-        ->type_name("FILE");
+        ->type_name("FILE")
+        ->check(file_name());
+    cmd->add_option("--plot", options.plot,
+                    "also draw the turn-off transient of every clamp option (coil current and collector voltage against "
+                    "time) into FILE.svg (written like --output); needs coil.inductance")
+        ->group("Size")
+        ->type_name("FILE.svg")
+        ->check(file_name());
     add_common_options(*cmd, options.common, true);
     add_spec_options(*cmd, options.spec);
     return cmd;
@@ -111,11 +140,13 @@ CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
     CLI::App* cmd = app.add_subcommand("pick",
                                        "Try every transistor (and diode) of the parts table against a spec; "
                                        "list the combinations, passing ones first, most robust first.");
-    cmd->add_option("--top", options.top, "list only the best N combinations")
+    cmd->add_option("--top", options.top, "list only the best N rows, a whole number")
         ->group("Pick")
         ->type_name("N")
         ->default_str("0: all")
-        ->check(whole_number(0, 1'000'000));
+        ->check(whole_number(0, 1'000'000'000));
+    cmd->add_flag("--all-clamps", options.all_clamps, "a row for every transistor and diode pair, not one per transistor")
+        ->group("Pick");
     add_common_options(*cmd, options.common, true);
     add_spec_options(*cmd, options.spec);
     return cmd;
@@ -164,10 +195,25 @@ CLI::App* setup_yield(CLI::App& app, YieldOptions& options) {
 CLI::App* setup_parts(CLI::App& app, PartsOptions& options) {
     CLI::App* cmd = app.add_subcommand("parts", "List the parts table, or show one part or preset in full.");
     cmd->add_option("KIND", options.kind,
-                    "npn, darlington, nmos, array, transistor, diode, rectifier, fast, signal, schottky, zener, tvs, "
-                    "coil or pin; or a part id");
-    cmd->add_option("ID", options.id, "a part id to show in full");
+                    "a kind, singular or plural: transistor, npn, darlington, nmos (mosfet), array, diode, rectifier, "
+                    "fast, signal, schottky, zener, tvs, coil, pin, preset, relay or contactor; or a part id");
+    cmd->add_option("ID", options.id, "a part id to show in full (case does not matter when the id is unique)");
     add_common_options(*cmd, options.common, false);
+    return cmd;
+}
+
+CLI::App* setup_board(CLI::App& app, BoardOptions& options) {
+    CLI::App* cmd = app.add_subcommand("board",
+                                       "Size every channel of a board file and check the limits they share (port, "
+                                       "package, supply, array package) at the worst set of channels on at once.");
+    cmd->add_option("BOARD", options.board_path, "board file (coilfit.board/1), or - for standard input")->required();
+    const std::string group = "Board";
+    cmd->add_flag("--brief", options.brief, "the channel lines, the checks that fail or warn, and the verdict")->group(group);
+    cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)")->group(group);
+    cmd->add_option("--channel", options.channel, "print one channel's full report (its name, its pin, or an entry's name)")
+        ->group(group)
+        ->type_name("NAME");
+    add_common_options(*cmd, options.common, true);
     return cmd;
 }
 
@@ -302,11 +348,15 @@ std::optional<int> parse_command_line(int argc, char** argv, Invocation& into) {
     app.set_version_flag("--version", std::string("coilfit ") + COILFIT_VERSION, "print the version")
         ->group(general_group);
     app.require_subcommand(1);
+    // One rule for repeated options, set before any is added so that every option of every
+    // subcommand inherits it: the last value given wins (README, "Usage").
+    app.option_defaults()->multi_option_policy(CLI::MultiOptionPolicy::TakeLast);
 
     const std::vector<std::pair<CLI::App*, Command>> commands{
         {setup_size(app, into.size), Command::size},
         {setup_pick(app, into.pick), Command::pick},
         {setup_yield(app, into.yield), Command::yield},
+        {setup_board(app, into.board), Command::board},
         {setup_parts(app, into.parts), Command::parts},
     };
     for (const auto& [cmd, id] : commands) cmd->get_help_ptr()->description("show this help")->group(general_group);

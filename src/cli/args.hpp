@@ -9,7 +9,7 @@
 
 namespace coilfit::cli {
 
-enum class Command { size, parts, pick, yield };
+enum class Command { size, parts, pick, yield, board };
 
 struct Invocation {
     Command command = Command::size;
@@ -17,6 +17,7 @@ struct Invocation {
     PartsOptions parts;
     PickOptions pick;
     YieldOptions yield;
+    BoardOptions board;
 };
 
 // Reads argv into `into`. Returns an exit code when the run ends here: 0 after --help or

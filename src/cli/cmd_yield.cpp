@@ -102,8 +102,8 @@ std::string design_line(const Spec& spec, const YieldResult& r) {
     }
     s += ", clamp ";
     s += clamp_type_name(spec.clamp.type);
-    if (spec.clamp.diode) s += " " + spec.clamp.diode->id;
-    if (spec.clamp.zener && spec.clamp.type == ClampType::diode_zener) s += " + " + spec.clamp.zener->id;
+    if (spec.clamp.diode) s += " " + display_id(*spec.clamp.diode);
+    if (spec.clamp.zener && spec.clamp.type == ClampType::diode_zener) s += " + " + display_id(*spec.clamp.zener);
     return s;
 }
 
@@ -190,13 +190,13 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
     j["confidence"] = 0.95;
     j["worst_case"] = r.design.worst.passes() ? "pass" : "fail";
     io::Json design;
-    design["transistor"] = origin(spec.transistor).id;
+    design["transistor"] = display_id(origin(spec.transistor));  // "inline ID" as in every output
     design["driver"] = transistor_kind_name(spec.transistor);
     design[spec.mosfet() ? "gate_resistor_ohm" : "base_resistor_ohm"] =
         r.design.r_drive_ohm ? io::Json(*r.design.r_drive_ohm) : io::Json(nullptr);
     design["clamp"] = clamp_type_name(spec.clamp.type);
-    design["diode"] = spec.clamp.diode ? io::Json(spec.clamp.diode->id) : io::Json(nullptr);
-    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(spec.clamp.zener->id)
+    design["diode"] = spec.clamp.diode ? io::Json(display_id(*spec.clamp.diode)) : io::Json(nullptr);
+    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(display_id(*spec.clamp.zener))
                                                                                    : io::Json(nullptr);
     j["design"] = design;
     io::Json checks = io::Json::array();
@@ -249,6 +249,9 @@ private:
 int run_yield(const YieldOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const Spec spec = io::read_spec(build_spec_document(options.spec), table);
+    // Checked before the samples run, so that a clash is reported at once.
+    const io::RunInputs inputs = run_inputs(options.spec, table);
+    check_outputs(options.common.output, {}, inputs);
 
     YieldSettings settings;
     settings.samples = options.samples;
@@ -271,7 +274,7 @@ int run_yield(const YieldOptions& options) {
         style.color = use_color(options.common.output);
         text = render_text(spec, result, style, text_width());
     }
-    emit(text, options.common.output);
+    emit(text, options.common.output, inputs);
     return result.passed == result.settings.samples ? exit_pass : exit_fail;
 }
 

@@ -13,7 +13,9 @@ struct SizeOptions {
     SpecOptions spec;
     CommonOptions common;
     bool strict = false;
+    bool brief = false;   // --brief: verdict, design, failing and warning checks
     std::string netlist;  // --netlist FILE
+    std::string plot;     // --plot FILE.svg
 };
 int run_size(const SizeOptions& options);
 
@@ -28,6 +30,7 @@ struct PickOptions {
     SpecOptions spec;
     CommonOptions common;
     std::size_t top = 0;  // 0: all
+    bool all_clamps = false;  // --all-clamps: every transistor and diode pair
 };
 int run_pick(const PickOptions& options);
 
@@ -41,5 +44,14 @@ struct YieldOptions {
     unsigned jobs = 0;  // 0: all cores
 };
 int run_yield(const YieldOptions& options);
+
+struct BoardOptions {
+    std::string board_path;
+    CommonOptions common;
+    bool brief = false;
+    bool strict = false;
+    std::string channel;  // --channel NAME: that channel's full report
+};
+int run_board(const BoardOptions& options);
 
 }  // namespace coilfit::cli

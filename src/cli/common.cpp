@@ -6,9 +6,9 @@
 #include <algorithm>
 #include <cstdio>
 #include <cstdlib>
-#include <filesystem>
-#include <fstream>
 #include <iostream>
+
+#include "io/json_read.hpp"
 
 #include "cli/spec_flags.hpp"
 
@@ -30,53 +30,47 @@ io::PartsTable load_table(const CommonOptions& options) {
     return io::load_parts(io::resolve_parts_path(options.parts_path));
 }
 
-void emit(const std::string& text, const std::string& output_path) {
-    if (output_path.empty()) {
-        std::cout << text;
-        std::cout.flush();
-        if (!std::cout) throw InputError("cannot write to standard output");
-        return;
-    }
-    namespace fs = std::filesystem;
-    const fs::path target(output_path);
-    fs::path dir = target.parent_path();
-    if (dir.empty()) dir = ".";
-    const fs::path tmp = dir / (target.filename().string() + ".tmp." + std::to_string(::getpid()));
-    {
-        std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
-        if (!out) throw InputError(output_path + ": cannot write here (" + dir.string() + ")");
-        out << text;
-        out.flush();
-        if (!out) {
-            out.close();
-            std::error_code ec;
-            fs::remove(tmp, ec);
-            throw InputError(output_path + ": writing failed; nothing was written");
-        }
-    }
-    std::error_code ec;
-    fs::rename(tmp, target, ec);
-    if (ec) {
-        fs::remove(tmp, ec);
-        throw InputError(output_path + ": cannot replace the file: " + ec.message());
-    }
+io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table) {
+    io::RunInputs in;
+    if (!spec.spec_path.empty() && spec.spec_path != "-") in.push_back(spec.spec_path);
+    in.insert(in.end(), table.files.begin(), table.files.end());
+    return in;
 }
 
+void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
+                   const std::string& plot_path) {
+    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
+                      inputs);
+}
+
+void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs, const std::string& flag) {
+    std::cout.flush();
+    io::write_output({flag, output_path.empty() ? "-" : output_path}, text, inputs);
+}
+
+std::string message_line(const std::string& what) { return io::printable(what, what.size()); }
+
 bool use_color(const std::string& output_path) {
-    if (!output_path.empty()) return false;
+    if (!output_path.empty() && output_path != "-") return false;
     if (const char* nc = std::getenv("NO_COLOR"); nc && *nc) return false;
     if (const char* term = std::getenv("TERM"); term && std::string(term) == "dumb") return false;
     return ::isatty(STDOUT_FILENO) == 1;
 }
 
 std::size_t text_width() {
-    if (const char* c = std::getenv("COLUMNS")) {
-        const long n = std::strtol(c, nullptr, 10);
-        if (n >= 60 && n <= 300) return static_cast<std::size_t>(n);
+    // COLUMNS first (the user's explicit choice), then the terminal's own width, else 100; never
+    // below 40 columns, the narrowest the text layouts fit.
+    constexpr long narrowest = 40;
+    if (const char* c = std::getenv("COLUMNS"); c && *c) {
+        char* end = nullptr;
+        const long n = std::strtol(c, &end, 10);
+        if (end && *end == '\0' && n > 0) return static_cast<std::size_t>(std::clamp(n, narrowest, 1000L));
     }
-    winsize ws{};
-    if (::isatty(STDOUT_FILENO) == 1 && ::ioctl(STDOUT_FILENO, TIOCGWINSZ, &ws) == 0 && ws.ws_col > 0) {
-        return std::clamp<std::size_t>(ws.ws_col, 60, 300);
+    if (::isatty(STDOUT_FILENO) == 1) {
+        winsize ws{};
+        if (::ioctl(STDOUT_FILENO, TIOCGWINSZ, &ws) == 0 && ws.ws_col > 0) {
+            return static_cast<std::size_t>(std::max<long>(ws.ws_col, narrowest));
+        }
     }
     return 100;
 }

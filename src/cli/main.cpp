@@ -19,12 +19,14 @@ int main(int argc, char** argv) {
                 return run_pick(invocation.pick);
             case Command::yield:
                 return run_yield(invocation.yield);
+            case Command::board:
+                return run_board(invocation.board);
         }
     } catch (const coilfit::InputError& e) {
-        std::cerr << "coilfit: error: " << e.what() << "\n";
+        std::cerr << "coilfit: error: " << message_line(e.what()) << "\n";
         return exit_bad_input;
     } catch (const std::exception& e) {
-        std::cerr << "coilfit: error: " << e.what() << "\n";
+        std::cerr << "coilfit: error: " << message_line(e.what()) << "\n";
         return exit_bad_input;
     } catch (...) {
         // Nothing escapes main (style.md, "Errors").

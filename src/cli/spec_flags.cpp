@@ -40,7 +40,7 @@ constexpr SpecFlag table[] = {
     {"--pin-voh", "pin.voh", "VOLTAGE", "guaranteed output high voltage at --pin-voh-current, e.g. 2.9V", ""},
     {"--pin-voh-current", "pin.voh_current", "CURRENT", "current of the VOH rating, e.g. 8mA", ""},
     {"--pin-voh-vdd", "pin.voh_vdd", "VOLTAGE", "the pin supply VOH is stated at", "the lowest VDD"},
-    {"--pin-max-current", "pin.max_current", "CURRENT", "most the pin may source, e.g. 8mA", ""},
+    {"--pin-max-current", "pin.max_current", "CURRENT", "the pin's rated output current, e.g. 8mA", ""},
     {"--transistor", "transistor", "ID",
      "transistor id from the parts table (npn, darlington, nmos or array), e.g. 2N4401", ""},
     {"--clamp", "clamp.type", "TYPE", "clamp: diode, diode_zener, diode_resistor, diode_tvs or none", "diode"},
@@ -71,8 +71,15 @@ constexpr SpecFlag table[] = {
     {"--frequency", "switching.frequency", "FREQUENCY", "switching frequency, e.g. 1Hz", ""},
     {"--duty", "switching.duty", "PERCENT", "on-time share of the switching period", "50%"},
     {"--load-voltage", "load.voltage", "VOLTAGE", "voltage the contacts switch, e.g. 230V", ""},
-    {"--load-kind", "load.kind", "ac|dc", "ac or dc", ""},
+    {"--load-kind", "load.kind", "KIND",
+     "kind of load: resistive, inductive, motor, lamp, capacitive, solenoid, transformer (or ac, dc)", ""},
     {"--load-current", "load.current", "CURRENT", "current the contacts switch, e.g. 2A", ""},
+    {"--relay", "relay", "ID", "relay or contactor id from the parts table: fills the coil and the contacts", ""},
+    {"--load-type", "load.type", "ac|dc", "ac or dc: what the contacts switch", ""},
+    {"--load-inrush", "load.inrush", "CURRENT|Nx", "the load's inrush, in amperes (48A) or times the steady current (6x)",
+     "by kind"},
+    {"--load-power-factor", "load.power_factor", "RATIO", "power factor of an AC load, e.g. 0.8", ""},
+    {"--load-time-constant", "load.time_constant", "TIME", "L/R of a DC load, e.g. 20ms", ""},
 };
 
 }  // namespace
@@ -86,7 +93,7 @@ std::string_view spec_flag_group(std::string_view path) {
     if (section == "pin") return "Spec: microcontroller pin";
     if (section == "clamp") return "Spec: clamp";
     if (section == "policy") return "Spec: method policy";
-    if (section == "switching" || section == "load") return "Spec: switching and load";
+    if (section == "switching" || section == "load" || section == "relay") return "Spec: switching, relay and load";
     return "Spec: driver";  // transistor, base_resistor, gate_resistor, pulldown
 }
 

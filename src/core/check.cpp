@@ -31,6 +31,11 @@ constexpr std::array<CheckInfo, check_count> table{{
     {CheckId::contact_inrush, "contact.inrush", Unit::ampere, Stage::contact},
     {CheckId::contact_breaking, "contact.breaking", Unit::ampere, Stage::contact},
     {CheckId::contact_min_load, "contact.min_load", Unit::ampere, Stage::contact},
+    {CheckId::port_current, "port.current", Unit::ampere, Stage::board},
+    {CheckId::package_current, "package.current", Unit::ampere, Stage::board},
+    {CheckId::supply_current, "supply.current", Unit::ampere, Stage::board},
+    {CheckId::array_power, "array.power", Unit::watt, Stage::board},
+    {CheckId::array_current, "array.current", Unit::ampere, Stage::board},
 }};
 
 constexpr bool table_in_order() {

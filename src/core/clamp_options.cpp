@@ -11,6 +11,31 @@ namespace {
 
 std::string q(double value, Unit unit) { return format_quantity(value, unit); }
 
+// The option's turn-off for the plot (coilfit/transient.hpp): the current at the corner of the
+// longer release (the one the report quotes), the voltage at the corner of the higher peak.
+std::optional<TurnOff> turn_off(const Spec& s, const Evaluation& e) {
+    if (!s.coil.inductance_h || !e.clamp.at[0].has_timing) return std::nullopt;
+    const std::size_t slow = e.clamp.at[1].has_timing && e.clamp.at[1].release_time_s > e.clamp.at[0].release_time_s ? 1 : 0;
+    const std::size_t peak = e.clamp.at[1].peak_collector_v > e.clamp.at[0].peak_collector_v ? 1 : 0;
+    const ClampCorner& ks = e.clamp.at[slow];
+    const ClampCorner& kp = e.clamp.at[peak];
+    TurnOff t;
+    t.i0_a = ks.i0_a;
+    t.l_h = *s.coil.inductance_h;
+    t.r_coil_ohm = e.coil.at[slow].r_cold_ohm;
+    t.release_current_a = e.coil.release_current_a;
+    t.v_on_v = e.driver.at[slow].on_drop_v;
+    t.vc_timing_v = ks.v.timing_v;
+    t.r_series_timing_ohm = ks.v.series_timing_ohm;
+    t.vs_hi_v = e.conditions.vs_hi_v;
+    t.i0_peak_a = kp.i0_a;
+    t.r_coil_peak_ohm = e.coil.at[peak].r_cold_ohm;
+    // The series resistor's drop follows the current; the rest of the clamp voltage is constant.
+    t.vc_peak_v = kp.v.peak_v - kp.i0_a * kp.v.series_ohm;
+    t.r_series_peak_ohm = kp.v.series_ohm;
+    return t;
+}
+
 ClampOption option_for(const Spec& spec, const Sized& sized, ClampSpec clamp, std::string label, bool chosen) {
     Spec s = spec;
     s.clamp = clamp;
@@ -33,6 +58,7 @@ ClampOption option_for(const Spec& spec, const Sized& sized, ClampSpec clamp, st
     }
     o.pulse_verdict = e.check(CheckId::clamp_pulse).verdict;
     o.chosen = chosen;
+    o.turn_off = turn_off(s, e);
     return o;
 }
 

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cmath>
 #include <map>
+#include <functional>
 
 #include "coilfit/sizing.hpp"
 #include "pick_reasons.hpp"
@@ -24,9 +25,9 @@ namespace {
 Candidate candidate_of(const Spec& trial, const Sized& sized) {
     const Evaluation& e = sized.worst;
     Candidate c;
-    c.transistor = origin(trial.transistor).id;
+    c.transistor = display_id(origin(trial.transistor));  // "inline ID" for a record of the spec
     c.driver = std::string(transistor_kind_name(trial.transistor));
-    c.diode = trial.clamp.diode ? trial.clamp.diode->id : std::string();
+    c.diode = trial.clamp.diode ? display_id(*trial.clamp.diode) : std::string();
     c.family = transistor_family(trial.transistor);
     c.resistor_ohm = sized.r_drive_ohm;
     c.pin_current_max_a = std::max(e.driver.at[0].pin_current_max_a, e.driver.at[1].pin_current_max_a);
@@ -69,8 +70,26 @@ double robustness(const Candidate& c) {
 
 }  // namespace
 
-PickResult pick(const Spec& spec, const Catalogue& catalogue) {
-    PickResult result;
+bool ranks_before(const Candidate& a, const Candidate& b) {
+    if (a.verdict != b.verdict) return a.verdict == Verdict::pass;
+    if (a.beyond_data != b.beyond_data) return !a.beyond_data;
+    if (a.verdict == Verdict::pass) {
+        const double ra = robustness(a);
+        const double rb = robustness(b);
+        if (ra != rb) return ra > rb;
+        if (a.margin_other != b.margin_other) return a.margin_other > b.margin_other;
+    }
+    if (a.worst_margin != b.worst_margin) return a.worst_margin > b.worst_margin;
+    if (a.pin_current_max_a != b.pin_current_max_a) return a.pin_current_max_a < b.pin_current_max_a;
+    if (a.transistor != b.transistor) return a.transistor < b.transistor;
+    return a.diode < b.diode;
+}
+
+namespace {
+
+// The diodes tried behind each transistor: the table's (or the spec's own when the table has
+// none); none for clamp "none".
+std::vector<std::optional<Diode>> diodes_to_try(const Spec& spec, const Catalogue& catalogue) {
     std::vector<std::optional<Diode>> diodes;
     if (spec.clamp.type == ClampType::none) {
         diodes.emplace_back(std::nullopt);
@@ -82,56 +101,99 @@ PickResult pick(const Spec& spec, const Catalogue& catalogue) {
     for (auto& d : diodes) {
         if (d) precompute_logs(*d);
     }
-    std::vector<Transistor> transistors;
-    for (const Bipolar& b : catalogue.bipolars) transistors.emplace_back(b);
-    for (const Mosfet& m : catalogue.mosfets) transistors.emplace_back(m);
-    for (const ArrayPart& a : catalogue.arrays) transistors.emplace_back(a);
+    return diodes;
+}
 
+// Tries one transistor with every diode; hands over its best row, or each pair's row (ranked
+// among themselves when rank_pairs: a heap that ranks them anyway does not need it).
+void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::optional<Diode>>& diodes, bool all_clamps, bool rank_pairs,
+                    pick_detail::FamilyFailures& failures, PickResult& counts, const std::function<void(const Candidate&)>& row) {
+    // A forced gain written for the spec's own kind of transistor does not carry over: a
+    // Darlington tried for an npn spec (or the other way round) takes its kind's default.
+    trial.policy.forced_gain =
+        transistor_kind_name(trial.transistor) == transistor_kind_name(spec.transistor) ? spec.policy.forced_gain : std::nullopt;
+    precompute_logs(trial);
+    // An array channel clamps through its own built-in diode.
+    const ArrayPart* array = trial.array();
+    const std::size_t n = array ? 1 : diodes.size();
+    std::optional<Candidate> best;
+    std::vector<Candidate> pairs;
+    std::size_t passing = 0;
+    for (std::size_t k = 0; k < n; ++k) {
+        if (array) {
+            trial.clamp = ClampSpec{};
+            trial.clamp.diode = array->diode;
+        } else {
+            trial.clamp.diode = diodes[k];
+        }
+        const Sized sized = size_numbers(trial);
+        Candidate c = candidate_of(trial, sized);
+        ++counts.evaluations;
+        if (!c.failed.empty()) failures.add(c, sized.worst);
+        passing += c.verdict == Verdict::pass ? 1U : 0U;
+        if (all_clamps) pairs.push_back(std::move(c));
+        else if (!best || ranks_before(c, *best)) best = std::move(c);
+    }
+    trial.clamp = spec.clamp;
+    if (best) {
+        best->clamps_tried = n;
+        best->clamps_passing = passing;
+        pairs.push_back(std::move(*best));
+    }
+    if (rank_pairs) std::sort(pairs.begin(), pairs.end(), ranks_before);
+    for (const Candidate& c : pairs) {
+        ++counts.rows;
+        counts.passing += c.verdict == Verdict::pass ? 1U : 0U;
+        row(c);
+    }
+}
+
+PickResult pick_rows(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings, bool rank_pairs,
+                     const std::function<void(const Candidate&)>& row) {
+    PickResult result;
+    const std::vector<std::optional<Diode>> diodes = diodes_to_try(spec, catalogue);
     pick_detail::FamilyFailures failures;
     Spec trial = spec;
-    for (Transistor& t : transistors) {
-        trial.transistor = std::move(t);
-        // A forced gain written for the spec's own kind of transistor does not carry over: a
-        // Darlington tried for an npn spec (or the other way round) takes its kind's default.
-        trial.policy.forced_gain = transistor_kind_name(trial.transistor) == transistor_kind_name(spec.transistor)
-                                       ? spec.policy.forced_gain
-                                       : std::nullopt;
-        precompute_logs(trial);
-        // An array channel clamps through its own built-in diode.
-        const ArrayPart* array = trial.array();
-        const std::size_t n = array ? 1 : diodes.size();
-        for (std::size_t k = 0; k < n; ++k) {
-            if (array) {
-                trial.clamp = ClampSpec{};
-                trial.clamp.diode = array->diode;
-            } else {
-                trial.clamp.diode = diodes[k];
-            }
-            const Sized sized = size_numbers(trial);
-            Candidate c = candidate_of(trial, sized);
-            if (!c.failed.empty()) failures.add(c, sized.worst);
-            result.candidates.push_back(std::move(c));
+    // The table's transistors one at a time, copied into the trial spec (never all at once).
+    const auto each = [&](const auto& parts) {
+        for (const auto& part : parts) {
+            trial.transistor = part;
+            try_transistor(trial, spec, diodes, settings.all_clamps, rank_pairs, failures, result, row);
         }
-        trial.clamp = spec.clamp;
-    }
-
-    std::stable_sort(result.candidates.begin(), result.candidates.end(), [](const Candidate& a, const Candidate& b) {
-        if (a.verdict != b.verdict) return a.verdict == Verdict::pass;
-        if (a.beyond_data != b.beyond_data) return !a.beyond_data;
-        if (a.verdict == Verdict::pass) {
-            const double ra = robustness(a);
-            const double rb = robustness(b);
-            if (ra != rb) return ra > rb;
-            if (a.margin_other != b.margin_other) return a.margin_other > b.margin_other;
-        }
-        if (a.worst_margin != b.worst_margin) return a.worst_margin > b.worst_margin;
-        if (a.pin_current_max_a != b.pin_current_max_a) return a.pin_current_max_a < b.pin_current_max_a;
-        if (a.transistor != b.transistor) return a.transistor < b.transistor;
-        return a.diode < b.diode;
-    });
-    const bool any_pass = !result.candidates.empty() && result.candidates.front().verdict == Verdict::pass;
-    if (!any_pass) result.reasons = failures.reasons(spec);
+    };
+    each(catalogue.bipolars);
+    each(catalogue.mosfets);
+    each(catalogue.arrays);
+    if (result.passing == 0) result.reasons = failures.reasons(spec);
     return result;
 }
+
+}  // namespace
+
+PickResult pick_each(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings,
+                     const std::function<void(const Candidate&)>& row) {
+    return pick_rows(spec, catalogue, settings, true, row);
+}
+
+PickResult pick(const Spec& spec, const Catalogue& catalogue, const PickSettings& settings) {
+    // A bounded heap of the best `top` rows, the worst kept on top so it leaves first.
+    std::vector<Candidate> kept;
+    const std::size_t top = settings.top;
+    PickResult result = pick_rows(spec, catalogue, settings, false, [&](const Candidate& c) {
+        if (top != 0 && kept.size() == top) {
+            if (!ranks_before(c, kept.front())) return;
+            std::pop_heap(kept.begin(), kept.end(), ranks_before);
+            kept.back() = c;
+        } else {
+            kept.push_back(c);
+        }
+        if (top != 0) std::push_heap(kept.begin(), kept.end(), ranks_before);
+    });
+    std::sort(kept.begin(), kept.end(), ranks_before);
+    result.candidates = std::move(kept);
+    return result;
+}
+
+PickResult pick(const Spec& spec, const Catalogue& catalogue) { return pick(spec, catalogue, PickSettings{}); }
 
 }  // namespace coilfit

@@ -1,5 +1,7 @@
 #include "coilfit/quantity.hpp"
 
+#include "coilfit/text.hpp"
+
 #include <array>
 #include <algorithm>
 #include <charconv>
@@ -36,6 +38,7 @@ UnitInfo info(Unit unit) {
     case Unit::kelvin_per_watt: return {"a thermal resistance", "K/W", "_k_per_w", "200K/W"};
     case Unit::per_kelvin: return {"a temperature coefficient", "/K", "_per_k", "0.6%/K"};
     case Unit::volt_per_kelvin: return {"a voltage temperature coefficient", "V/K", "_v_per_k", "-4mV/K"};
+    case Unit::farad: return {"a capacitance", "F", "_f", "100nF"};
     }
     return {"a value", "", "", "1"};
 }
@@ -87,54 +90,9 @@ std::string_view trim(std::string_view s) {
 
 bool is_digit(char c) { return c >= '0' && c <= '9'; }
 
-// Length of the well-formed UTF-8 sequence at s[i], 0 when the bytes there are not one.
-std::size_t utf8_length(std::string_view s, std::size_t i) {
-    const auto b = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
-    const unsigned char c = b(i);
-    if (c < 0x80) return 1;
-    const std::size_t n = c >= 0xC2 && c <= 0xDF ? 2 : c >= 0xE0 && c <= 0xEF ? 3 : c >= 0xF0 && c <= 0xF4 ? 4 : 0;
-    if (n == 0 || i + n > s.size()) return 0;
-    const unsigned char lo = c == 0xE0 ? 0xA0 : c == 0xF0 ? 0x90 : 0x80;
-    const unsigned char hi = c == 0xED ? 0x9F : c == 0xF4 ? 0x8F : 0xBF;
-    if (b(i + 1) < lo || b(i + 1) > hi) return 0;
-    for (std::size_t k = 2; k < n; ++k) {
-        if (b(i + k) < 0x80 || b(i + k) > 0xBF) return 0;
-    }
-    return n;
-}
-
-// Shows the offending text in a message: printable ASCII and UTF-8 as they are, control
-// characters and bytes that are not UTF-8 escaped, long texts cut (never inside a character),
-// so that binary garbage never reaches a terminal raw.
-std::string quoted(std::string_view text) {
-    std::string out = "\"";
-    std::size_t shown = 0;
-    for (std::size_t i = 0; i < text.size();) {
-        if (++shown > 40) {
-            out += "...";
-            break;
-        }
-        const char c = text[i];
-        const auto u = static_cast<unsigned char>(c);
-        const std::size_t n = utf8_length(text, i);
-        if (c == '"' || c == '\\') {
-            out += '\\';
-            out += c;
-        } else if (n == 0 || u < 0x20 || u == 0x7f || (u == 0xC2 && static_cast<unsigned char>(text[i + 1]) < 0xA0)) {
-            constexpr std::string_view hex = "0123456789abcdef";
-            out += "\\x";
-            out += hex[u >> 4U];
-            out += hex[u & 0xfU];
-            i += 1;
-            continue;
-        } else {
-            out.append(text.substr(i, n));
-        }
-        i += n;
-    }
-    out += '"';
-    return out;
-}
+// Shows the offending text in a message, escaped as every message escapes input
+// (coilfit/text.hpp): binary garbage, controls and invisible characters never reach a terminal raw.
+std::string quoted(std::string_view text) { return "\"" + escape_text(text, 40, true) + "\""; }
 
 [[noreturn]] void fail(Unit expected, std::string_view text, std::string_view why = {}) {
     std::string msg = "expected ";
@@ -220,6 +178,10 @@ std::string format_quantity(double value, Unit unit, int significant) {
         return plain_number(value * 100.0, significant) + " %/K";
     default: break;
     }
+    // A frequency below 1 Hz reads plainly ("0.1 Hz"): "100 mHz" is misread as megahertz.
+    if (unit == Unit::hertz && std::abs(value) >= 1e-3 && std::abs(value) < 1.0) {
+        return plain_number(value, significant) + " Hz";
+    }
     static constexpr std::array<std::pair<double, std::string_view>, 8> steps{{
         {1e9, "G"}, {1e6, "M"}, {1e3, "k"}, {1.0, ""}, {1e-3, "m"}, {1e-6, "µ"}, {1e-9, "n"}, {1e-12, "p"}}};
     const double mag = std::abs(value);
@@ -246,23 +208,11 @@ std::string_view unit_symbol(Unit unit) { return info(unit).symbol; }
 std::string_view unit_key_suffix(Unit unit) { return info(unit).key_suffix; }
 std::string_view unit_example(Unit unit) { return info(unit).example; }
 
-double parse_quantity(std::string_view text, Unit expected) {
-    const std::string_view s = trim(text);
-    if (s.empty()) fail(expected, text);
-    if (s.size() > 64) {
-        throw InputError("expected " + std::string(info(expected).noun) + " such as \"" +
-                         std::string(info(expected).example) + "\", got a text of " +
-                         std::to_string(s.size()) + " characters");
-    }
+namespace {
 
-    if (expected == Unit::ohm) {
-        if (const auto rkm = parse_rkm(s)) {
-            if (!std::isfinite(*rkm)) fail(expected, text, "out of range");
-            return *rkm;
-        }
-    }
-
-    // The number: optional sign, digits with at most one point, optional exponent.
+// The number at the start of s: optional sign, digits with at most one point, optional
+// exponent. Sets `end` to the first character after it.
+double read_number(std::string_view s, std::string_view text, Unit expected, std::size_t& end) {
     std::size_t i = 0;
     bool negative = false;
     if (s[i] == '+' || s[i] == '-') {
@@ -286,49 +236,66 @@ double parse_quantity(std::string_view text, Unit expected) {
         }
     }
     double value = 0.0;
-    {
-        const std::string number(s.substr(number_start, i - number_start));
-        const auto [ptr, ec] = std::from_chars(number.data(), number.data() + number.size(), value);
-        if (ec != std::errc() || ptr != number.data() + number.size()) fail(expected, text, "out of range");
-    }
-    if (negative) value = -value;
+    const std::string number(s.substr(number_start, i - number_start));
+    const auto [ptr, ec] = std::from_chars(number.data(), number.data() + number.size(), value);
+    if (ec != std::errc() || ptr != number.data() + number.size()) fail(expected, text, "out of range");
+    end = i;
+    return negative ? -value : value;
+}
 
-    std::string_view rest = trim(s.substr(i));
+struct Suffix {
     double factor = 1.0;
-    std::optional<Unit> found;
-    if (!rest.empty()) {
-        if (rest == "%") {
-            if (expected != Unit::ratio) fail(expected, text, "a percentage");
-            factor = 0.01;
-            found = Unit::ratio;
-        } else if (rest == "%/K" || rest == "%/°C" || rest == "%/C") {
-            factor = 0.01;
-            found = Unit::per_kelvin;
-        } else if (expected == Unit::ohm && rest.front() == 'K' &&
-                   (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
-            // "33K" and "2.2KΩ" for kilo-ohms are common on resistor labels.
-            factor = 1e3;
-            if (rest.size() > 1) found = Unit::ohm;
-        } else if (const auto plain = match_symbol(rest)) {
-            found = plain;
-        } else {
-            bool matched = false;
-            for (const auto& p : prefixes) {
-                if (rest.substr(0, p.text.size()) != p.text) continue;
-                const std::string_view after = rest.substr(p.text.size());
-                if (after.empty()) {
-                    factor = p.factor;
-                    matched = true;
-                } else if (const auto u = match_symbol(after)) {
-                    factor = p.factor;
-                    found = u;
-                    matched = true;
-                }
-                if (matched) break;
-            }
-            if (!matched) fail(expected, text);
+    std::optional<Unit> unit;  // the unit the suffix names, if it names one
+};
+
+// What follows the number: "%", "%/K", a unit symbol, an SI prefix with or without a symbol.
+Suffix read_suffix(std::string_view rest, std::string_view text, Unit expected) {
+    Suffix out;
+    if (rest.empty()) return out;
+    if (rest == "%") {
+        if (expected != Unit::ratio) fail(expected, text, "a percentage");
+        return {0.01, Unit::ratio};
+    }
+    if (rest == "%/K" || rest == "%/°C" || rest == "%/C") return {0.01, Unit::per_kelvin};
+    if (expected == Unit::ohm && rest.front() == 'K' && (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
+        // "33K" and "2.2KΩ" for kilo-ohms are common on resistor labels.
+        out.factor = 1e3;
+        if (rest.size() > 1) out.unit = Unit::ohm;
+        return out;
+    }
+    if (const auto plain = match_symbol(rest)) return {1.0, plain};
+    for (const auto& p : prefixes) {
+        if (rest.substr(0, p.text.size()) != p.text) continue;
+        const std::string_view after = rest.substr(p.text.size());
+        if (after.empty()) return {p.factor, std::nullopt};
+        if (const auto u = match_symbol(after)) return {p.factor, u};
+    }
+    fail(expected, text);
+}
+
+}  // namespace
+
+double parse_quantity(std::string_view text, Unit expected) {
+    const std::string_view s = trim(text);
+    if (s.empty()) fail(expected, text);
+    if (count_characters(s) > 64) {
+        throw InputError("expected " + std::string(info(expected).noun) + " such as \"" +
+                         std::string(info(expected).example) + "\", got a text of " +
+                         std::to_string(count_characters(s)) + " characters");
+    }
+
+    if (expected == Unit::ohm) {
+        if (const auto rkm = parse_rkm(s)) {
+            if (!std::isfinite(*rkm)) fail(expected, text, "out of range");
+            return *rkm;
         }
     }
+
+    std::size_t end = 0;
+    const double value = read_number(s, text, expected, end);
+    const std::string_view rest = trim(s.substr(end));
+    const Suffix suffix = read_suffix(rest, text, expected);
+    std::optional<Unit> found = suffix.unit;
     // "C" is a coulomb where a charge is expected ("1.5nC"), a temperature elsewhere.
     if (found == Unit::celsius && expected == Unit::coulomb && (rest.back() == 'C') && rest.find("°") == std::string_view::npos) {
         found = Unit::coulomb;
@@ -336,12 +303,12 @@ double parse_quantity(std::string_view text, Unit expected) {
     if (found && *found != expected) {
         fail(expected, text, info(*found).noun);
     }
-    if (factor != 1.0 && (expected == Unit::celsius || expected == Unit::kelvin ||
-                          expected == Unit::number || (expected == Unit::ratio && !found) ||
-                          (expected == Unit::per_kelvin && found != Unit::per_kelvin))) {
+    if (suffix.factor != 1.0 && (expected == Unit::celsius || expected == Unit::kelvin ||
+                                 expected == Unit::number || (expected == Unit::ratio && !found) ||
+                                 (expected == Unit::per_kelvin && found != Unit::per_kelvin))) {
         fail(expected, text, "no prefix here");
     }
-    const double result = value * factor;
+    const double result = value * suffix.factor;
     if (!std::isfinite(result)) fail(expected, text, "out of range");
     return result == 0 ? 0.0 : result;  // "-0" reads as 0
 }

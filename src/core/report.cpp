@@ -14,7 +14,8 @@ std::string check_message(CheckId id, const CheckValue& c, const Spec& spec, con
     case Stage::coil: return coil_message(id, c, spec, e);
     case Stage::clamp: return clamp_message(id, c, spec, e);
     case Stage::timing: return timing_message(id, c, spec, e);
-    case Stage::contact: return {};
+    case Stage::contact: return contact_message(id, c, spec);
+    case Stage::board: return {};  // a board's checks are worded in src/core/board_words.cpp
     case Stage::driver: break;
     }
     if (spec.bipolar()) return bipolar_message(id, c, spec, e);
@@ -27,7 +28,8 @@ std::string check_skip_reason(CheckId id, const Spec& spec) {
     case Stage::coil: return coil_skip_reason(id, spec);
     case Stage::clamp: return clamp_skip_reason(id, spec);
     case Stage::timing: return timing_skip_reason(id, spec);
-    case Stage::contact: return "not checked: give the load and the relay's contact ratings to check the contacts";
+    case Stage::contact: return contact_skip_reason(id, spec);
+    case Stage::board: return "not checked: a board's check (coilfit board)";
     case Stage::driver: break;
     }
     switch (id) {
@@ -43,6 +45,7 @@ std::string check_skip_reason(CheckId id, const Spec& spec) {
 
 Unit check_unit(CheckId id, const CheckValue& c) {
     if (id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::avalanche)) return Unit::joule;
+    if (id == CheckId::contact_min_load && c.detail == static_cast<std::uint8_t>(ContactCase::min_voltage)) return Unit::volt;
     return check_info(id).unit;
 }
 
@@ -127,6 +130,7 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
     r.notes = report::notes(r.spec, r.sized);
     r.cautions = report::cautions(r.spec);
     r.clamp_options = report::clamp_options(r.spec, catalogue, r.sized);
+    r.contact = report::contact_report(r.spec, r.clamp_options);
     return r;
 }
 

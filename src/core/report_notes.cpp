@@ -13,13 +13,19 @@ std::string n(double value) { return format_quantity(value, Unit::number); }
 // Extra-low voltage limits: 50 V AC, 120 V ripple-free DC (IEC 61140 / IEC 60364 ELV bands).
 constexpr double elv_ac_v = 50.0;
 constexpr double elv_dc_v = 120.0;
+// The top of low voltage: 1000 V AC, 1500 V DC (IEC 61140 bands).
+constexpr double lv_ac_v = 1000.0;
+constexpr double lv_dc_v = 1500.0;
 
 void bipolar_notes(std::vector<std::string>& notes, const Spec& spec, const Sized& sized, const BipolarFigures& f) {
     const Bipolar& tr = *spec.bipolar();
     const BipolarCorner& k = f.at[static_cast<std::size_t>(sized.worst.check(CheckId::transistor_saturation).corner)];
     const std::string at = " at " + q(k.current_a, Unit::ampere);
-    notes.push_back("a transistor on this pin needs hFE min of at least " + n(k.hfe_needed) + at + " (overdrive " +
-                    n(spec.policy.overdrive) + " x coil current / pin limit " + q(spec.pin.max_current_a, Unit::ampere) + ")");
+    // When the forced-gain policy sets the base current, more gain does not help: no hFE advice.
+    if (!k.policy_binds) {
+        notes.push_back("a transistor on this pin needs hFE min of at least " + n(k.hfe_needed) + at + " (overdrive " +
+                        n(spec.policy.overdrive) + " x coil current / pin limit " + q(spec.pin.max_current_a, Unit::ampere) + ")");
+    }
     if (!spec.policy.forced_gain && tr.kind == BipolarKind::darlington) {
         notes.push_back("forced gain taken from the Darlington's Vce(sat) test ratio, " + n(k.forced_gain_policy) + ", instead of 10");
     }
@@ -148,26 +154,41 @@ std::vector<std::string> notes(const Spec& spec, const Sized& sized) {
         out.push_back("the clamp resistor's power is checked against its rating " + q(spec.clamp.resistor_power_w, Unit::watt) +
                       " derated by policy.power_derating");
     }
+    contact_notes(out, spec);
     return out;
 }
 
 std::vector<std::string> cautions(const Spec& spec) {
     std::vector<std::string> out;
     out.emplace_back("figures are worst-case estimates from datasheet limits; the shipped parts table holds values "
-                     "from memory: confirm every part against the datasheet in use and the design on the bench; "
-                     "wiring to mains follows local electrical codes and licensed practice");
-    const std::string contact_rules =
-        "keep creepage and clearance between the coil circuit and the contacts, fuse the load, enclose live parts, "
-        "and follow local electrical codes and licensed practice";
-    if (spec.load) {
-        const bool hazardous = spec.load->kind == LoadKind::ac ? spec.load->voltage_v > elv_ac_v : spec.load->voltage_v > elv_dc_v;
-        if (hazardous) {
-            out.push_back("the contacts switch " + q(spec.load->voltage_v, Unit::volt) +
-                          (spec.load->kind == LoadKind::ac ? " AC" : " DC") + ", above extra-low voltage: hazardous; " +
-                          contact_rules);
-        }
+                     "from memory: confirm every part against the datasheet in use and the design on the bench");
+    // One caution keyed to the load voltage (src/method.md "Safety"; IEC 61140 voltage bands).
+    const std::string rules =
+        "keep creepage and clearance between the coil circuit and the contacts (insulation coordination per IEC 60664-1 "
+        "and the product standard of the equipment), fuse the load, enclose live parts, and follow local electrical codes "
+        "and licensed practice";
+    if (!spec.load) {
+        out.push_back("if the contacts switch mains or any voltage above extra-low voltage (50 V AC, 120 V ripple-free DC, "
+                      "IEC 61140): " + rules);
+        return out;
+    }
+    const LoadSpec& load = *spec.load;
+    const bool ac = load.kind == LoadKind::ac;
+    const std::string what = "the contacts switch " + q(load.voltage_v, Unit::volt) + (ac ? " AC" : " DC");
+    const double elv = ac ? elv_ac_v : elv_dc_v;
+    const double lv = ac ? lv_ac_v : lv_dc_v;
+    if (load.voltage_v > lv) {
+        out.push_back(what + ", above extra-low voltage and above the low-voltage band (" + q(lv, Unit::volt) +
+                      (ac ? " AC" : " DC") + ", IEC 61140): hazardous, and beyond what a relay board is for; use switchgear "
+                      "rated for it, " + rules);
+    } else if (load.voltage_v > elv) {
+        out.push_back(what + ", above extra-low voltage (" + q(elv, Unit::volt) + (ac ? " AC" : " ripple-free DC") +
+                      ", IEC 61140): hazardous; " + rules);
     } else {
-        out.push_back("if the contacts switch mains or any voltage above extra-low voltage (50 V AC, 120 V DC): " + contact_rules);
+        out.push_back(what + ", within extra-low voltage (at most " + q(elv, Unit::volt) + (ac ? " AC" : " ripple-free DC") +
+                      ", IEC 61140) as long as its source is a safety extra-low voltage supply; fuse the load for its "
+                      "wiring, keep the contact wiring apart from any mains wiring, and follow local electrical codes "
+                      "and licensed practice");
     }
     return out;
 }
@@ -202,6 +223,11 @@ bool shows_skipped(CheckId id, const Spec& spec) {
         return spec.clamp.type == ClampType::diode_zener || spec.clamp.type == ClampType::diode_tvs ||
                (spec.clamp.type == ClampType::none && spec.mosfet() && spec.mosfet()->ear_j.has_value());
     case CheckId::coil_thermal: return spec.coil.thermal_resistance_k_per_w.has_value();
+    case CheckId::contact_voltage:
+    case CheckId::contact_current:
+    case CheckId::contact_inrush:
+    case CheckId::contact_breaking:
+    case CheckId::contact_min_load: return contact_side_shown(spec);
     default: return false;
     }
 }

@@ -155,6 +155,7 @@ std::vector<QuantityEntry> quantities(const Spec& spec, const Sized& sized) {
     add(qs, "junction_temp_max_c", e.driver.at[th].junction_c, Unit::celsius, "junction temperature, highest");
     clamp_quantities(qs, spec, e);
     timing_quantities(qs, e);
+    contact_quantities(qs, spec);
     return qs;
 }
 

@@ -43,6 +43,7 @@ void corner(const Prepared& p, const D& d, const Conditions& c, double r_drive_o
     stages::clamp_corner(p, c, coil.current_max_a, ln_i0, coil.ambient_c, coil.r_cold_ohm, e.coil.release_current_a, e.driver,
                          all, e.clamp.at[k], checks);
     stages::timing_corner(spec, coil, e.driver.at[k], e.clamp.at[k], all, e.timing.at[k], checks);
+    contact_checks(spec, checks);
 }
 
 // Writes every check anew (a reused Evaluation starts with each verdict skipped).

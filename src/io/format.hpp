@@ -29,7 +29,8 @@ struct fmt::formatter<coilfit::Quantity> {
 
 namespace coilfit::io {
 
-// Number of terminal columns a UTF-8 string takes (one per code point; our symbols are narrow).
+// Number of terminal columns a UTF-8 string takes: wide (CJK, fullwidth, emoji) code points take
+// two, combining and zero-width ones none, the rest one.
 [[nodiscard]] std::size_t display_width(std::string_view s);
 // Pads s with spaces on the right (or left) to a display width.
 [[nodiscard]] std::string pad_right(std::string_view s, std::size_t width);

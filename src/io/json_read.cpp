@@ -1,6 +1,8 @@
 #include "io/json_read.hpp"
 
 #include <array>
+#include <cerrno>
+#include <filesystem>
 #include <cmath>
 #include <cstdio>
 #include <fstream>
@@ -12,13 +14,14 @@
 
 namespace coilfit::io {
 
-void fail(const Origin& origin, const std::string& path, const std::string& what) {
-    const auto flag = origin.flags.find(path);
+void fail(const Origin& origin, const std::string& field, const std::string& what) {
+    const auto flag = origin.flags.find(field);
     if (flag != origin.flags.end()) throw InputError(flag->second + ": " + what);
+    const std::string path = origin.file_path(field);
     std::string msg = origin.file;
     if (!path.empty()) msg += (msg.empty() ? "" : ": ") + path;
     if (origin.flags_only && what.rfind("missing", 0) == 0) {
-        if (const auto name = origin.flag_names.find(path); name != origin.flag_names.end()) {
+        if (const auto name = origin.flag_names.find(field); name != origin.flag_names.end()) {
             throw InputError(msg + ": " + what + " (give " + name->second + ")");
         }
     }
@@ -48,42 +51,6 @@ void check_depth(std::string_view text, const std::string& file) {
             }
         } else if ((c == ']' || c == '}') && depth > 0) --depth;
     }
-}
-
-// Length of the well-formed UTF-8 sequence starting at s[i] (RFC 3629), 0 when it is not one.
-std::size_t utf8_length(std::string_view s, std::size_t i) {
-    const auto byte = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
-    const unsigned char c = byte(i);
-    if (c < 0x80) return 1;
-    std::size_t n = 0;
-    unsigned char lo = 0x80;
-    unsigned char hi = 0xBF;
-    if (c >= 0xC2 && c <= 0xDF) n = 2;
-    else if (c >= 0xE0 && c <= 0xEF) {
-        n = 3;
-        if (c == 0xE0) lo = 0xA0;  // no overlong forms
-        if (c == 0xED) hi = 0x9F;  // no UTF-16 surrogates
-    } else if (c >= 0xF0 && c <= 0xF4) {
-        n = 4;
-        if (c == 0xF0) lo = 0x90;
-        if (c == 0xF4) hi = 0x8F;  // at most U+10FFFF
-    } else {
-        return 0;
-    }
-    if (i + n > s.size()) return 0;
-    if (byte(i + 1) < lo || byte(i + 1) > hi) return 0;
-    for (std::size_t k = 2; k < n; ++k) {
-        if (byte(i + k) < 0x80 || byte(i + k) > 0xBF) return 0;
-    }
-    return n;
-}
-
-std::string hex_byte(unsigned char u) {
-    constexpr std::string_view hex = "0123456789abcdef";
-    std::string out = "\\x";
-    out += hex[u >> 4U];
-    out += hex[u & 0xfU];
-    return out;
 }
 
 // 1-based line and column of a byte offset.
@@ -146,41 +113,6 @@ std::string plain(double v) { return fmt::format("{:g}", v); }
 
 }  // namespace
 
-bool is_utf8(std::string_view text) {
-    for (std::size_t i = 0; i < text.size();) {
-        const std::size_t n = utf8_length(text, i);
-        if (n == 0) return false;
-        i += n;
-    }
-    return true;
-}
-
-std::string printable(std::string_view text, std::size_t max_chars) {
-    std::string out;
-    std::size_t shown = 0;
-    for (std::size_t i = 0; i < text.size();) {
-        if (shown++ >= max_chars) {
-            out += "...";
-            break;
-        }
-        const auto u = static_cast<unsigned char>(text[i]);
-        const std::size_t n = utf8_length(text, i);
-        if (n == 0 || u < 0x20 || u == 0x7f) {
-            out += hex_byte(u);
-            ++i;
-        } else if (n == 2 && u == 0xC2 && static_cast<unsigned char>(text[i + 1]) < 0xA0) {
-            // C1 control characters (U+0080..U+009F) can steer a terminal too.
-            out += hex_byte(u);
-            out += hex_byte(static_cast<unsigned char>(text[i + 1]));
-            i += 2;
-        } else {
-            out.append(text.substr(i, n));
-            i += n;
-        }
-    }
-    return out;
-}
-
 std::string read_text(const std::string& path, std::size_t max_bytes) {
     std::string data;
     auto read_stream = [&](std::istream& in, const std::string& label) {
@@ -197,10 +129,18 @@ std::string read_text(const std::string& path, std::size_t max_bytes) {
         read_stream(std::cin, "<stdin>");
         return data;
     }
+    const std::string shown = printable(path, 4096);
+    if (std::error_code ec; std::filesystem::is_directory(path, ec)) throw InputError(shown + ": a folder, not a file");
+    errno = 0;
     std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path + ": cannot open the file");
-    read_stream(in, path);
-    if (in.bad()) throw InputError(path + ": cannot read the file");
+    if (!in) {
+        const int err = errno;
+        if (err == EACCES) throw InputError(shown + ": cannot open the file (permission denied)");
+        if (err == ELOOP) throw InputError(shown + ": cannot open the file (a symbolic link loop)");
+        throw InputError(shown + ": cannot open the file");
+    }
+    read_stream(in, shown);
+    if (in.bad()) throw InputError(shown + ": cannot read the file");
     return data;
 }
 
@@ -334,11 +274,14 @@ std::optional<std::string> ObjectReader::text(const std::string& key, std::size_
     if (!v) return std::nullopt;
     if (!v->is_string()) fail_at(key, "expected a text in quotes, got " + describe(*v));
     const auto& s = v->get_ref<const Json::string_t&>();
-    if (s.size() > max_len) fail_at(key, fmt::format("expected a text of at most {} characters, got {}", max_len, s.size()));
-    // Texts reach terminals and JSON reports: no control characters, only UTF-8 (a flag's
-    // value is not checked by the JSON parser).
+    // Texts reach terminals and JSON reports: only UTF-8 (a flag's value is not checked by the
+    // JSON parser), no control characters, no bidi controls (they make a name read as another);
+    // the length is in characters, not bytes.
     if (!is_utf8(s)) fail_at(key, "expected UTF-8 text, got \"" + printable(s) + "\"");
-    if (printable(s, s.size()) != s) fail_at(key, "expected a text without control characters, got \"" + printable(s) + "\"");
+    const std::size_t chars = count_characters(s);
+    if (chars > max_len) fail_at(key, fmt::format("expected a text of at most {} characters, got {}", max_len, chars));
+    if (has_bidi_control(s)) fail_at(key, "expected a text without bidirectional controls, got \"" + printable(s) + "\"");
+    if (has_control(s)) fail_at(key, "expected a text without control characters, got \"" + printable(s) + "\"");
     return s;
 }
 

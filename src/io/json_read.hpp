@@ -13,6 +13,7 @@
 #include <nlohmann/json.hpp>
 
 #include "coilfit/quantity.hpp"
+#include "coilfit/text.hpp"
 
 namespace coilfit::io {
 
@@ -27,6 +28,27 @@ struct Origin {
     // from flag_names (every field the command line can set -> its flag).
     bool flags_only = false;
     std::map<std::string, std::string> flag_names;
+    // A document assembled from several places of one file (a board's channel: the board's
+    // sections, its defaults and the channel's own fields): per field path, where the file wrote
+    // it ("coil" -> "channels[2].coil"); a path under a listed one keeps its tail. A path not
+    // listed is named under path_prefix ("channels[2].").
+    std::map<std::string, std::string> written_at;
+    std::string path_prefix;
+
+    // Where the file wrote a field: the longest listed path that is the field or holds it, with
+    // the rest of the field's path kept; else the field under path_prefix.
+    [[nodiscard]] std::string file_path(const std::string& field) const {
+        if (written_at.empty() && path_prefix.empty()) return field;
+        for (std::size_t end = field.size(); end > 0; --end) {
+            if (end < field.size() && field[end] != '.' && field[end] != '[') continue;
+            const auto it = written_at.find(field.substr(0, end));
+            if (it != written_at.end()) return it->second + field.substr(end);
+        }
+        if (field.empty() && !path_prefix.empty() && path_prefix.back() == '.') {
+            return path_prefix.substr(0, path_prefix.size() - 1);
+        }
+        return path_prefix + field;
+    }
 };
 
 [[noreturn]] void fail(const Origin& origin, const std::string& path, const std::string& what);
@@ -85,10 +107,12 @@ private:
 // Describes a JSON value briefly for messages: "\"fourty\"", "true", "an object", ...
 [[nodiscard]] std::string describe(const Json& j);
 
-// Text made safe for a one-line message: control characters and bytes that are not UTF-8
-// become \xNN, and the text is cut after max_chars code points with "...".
-[[nodiscard]] std::string printable(std::string_view text, std::size_t max_chars = 40);
-// True when text is well-formed UTF-8 (no overlong forms, no surrogates, at most U+10FFFF).
-[[nodiscard]] bool is_utf8(std::string_view text);
+// Text made safe for a one-line message: the one escaping function (coilfit/text.hpp), so that
+// bytes that are not UTF-8 and controls show as \xNN, invisible and bidi characters as \uNNNN;
+// cut after max_chars characters with "...". Use it wherever input is echoed.
+[[nodiscard]] inline std::string printable(std::string_view text, std::size_t max_chars = 40) {
+    return escape_text(text, max_chars);
+}
+using coilfit::is_utf8;
 
 }  // namespace coilfit::io

@@ -71,15 +71,15 @@ std::string ascii(std::string_view s) {
 std::string clamp_words(const Spec& spec) {
     const ClampSpec& c = spec.clamp;
     switch (c.type) {
-    case ClampType::diode: return "diode " + c.diode->id;
+    case ClampType::diode: return "diode " + display_id(*c.diode);
     case ClampType::diode_tvs:
-        return fmt::format("diode {} + TVS {} (breakdown {} V to {} V)", c.diode->id, c.tvs->id, num(c.tvs->vbr_min_v),
+        return fmt::format("diode {} + TVS {} (breakdown {} V to {} V)", display_id(*c.diode), display_id(*c.tvs), num(c.tvs->vbr_min_v),
                            num(c.tvs->vbr_max_v));
     case ClampType::diode_zener:
-        return fmt::format("diode {} + zener {} ({} V +/- {} %)", c.diode->id, c.zener->id, num(c.zener->vz_v),
+        return fmt::format("diode {} + zener {} ({} V +/- {} %)", display_id(*c.diode), display_id(*c.zener), num(c.zener->vz_v),
                            num(100.0 * c.zener->tolerance));
     case ClampType::diode_resistor:
-        return fmt::format("diode {} + resistor {} ohm", c.diode->id, num(c.resistor_ohm.value_or(0)));
+        return fmt::format("diode {} + resistor {} ohm", display_id(*c.diode), num(c.resistor_ohm.value_or(0)));
     case ClampType::none: return "none";
     }
     return "none";
@@ -107,11 +107,7 @@ void check_simulable(const SizingReport& report) {
         throw InputError("--netlist: the design has no clamp, so the collector voltage is limited only by breakdown and "
                          "there is no release to simulate; choose clamp.type diode, diode_zener, diode_tvs or diode_resistor");
     }
-    if (spec.array()) {
-        throw InputError("--netlist: an array channel is not simulated yet; size the same coil with a discrete transistor "
-                         "to check the clamp and the release in a simulator");
-    }
-    if (!report.sized.r_drive_ohm) {
+    if (!spec.array() && !report.sized.r_drive_ohm) {
         throw InputError("--netlist: no " + std::string(report.resistor.kind) + " could be chosen, so there is no circuit to "
                          "simulate; give " + (spec.mosfet() ? "gate_resistor.value" : "base_resistor.value") +
                          " to simulate a resistor of your choice");
@@ -162,7 +158,9 @@ Plan make_plan(const SizingReport& report, const NetlistOptions& options) {
     p.c = &report.sized.conditions;
     p.k = &e.clamp.at[0];
     p.cold_devices = options.device_temperature && spec.bipolar();
-    p.drv = spec.mosfet() ? netlist::mosfet_netlist(report) : netlist::bipolar_netlist(report, p.cold_devices);
+    p.drv = spec.mosfet()  ? netlist::mosfet_netlist(report)
+            : spec.array() ? netlist::array_netlist(report)
+                           : netlist::bipolar_netlist(report, p.cold_devices);
     const Diode& diode = *spec.clamp.diode;
     p.l_h = *spec.coil.inductance_h;
     p.r_cold = e.coil.at[0].r_cold_ohm;
@@ -215,17 +213,17 @@ void write_header(Writer& w, const Plan& p) {
                           num(p.r_cold)));
     w.comment(fmt::format("    L = {} H (energised armature)", num(p.l_h)));
     w.comment(p.drv.comments.front());
-    w.comment(fmt::format("  transistor {}; clamp {}", origin(spec.transistor).id, clamp_words(spec)));
+    w.comment(fmt::format("  transistor {}; clamp {}", display_id(origin(spec.transistor)), clamp_words(spec)));
     w.comment("Two copies of the driver share the supply and the pin and differ only in the clamp models:");
     w.comment("  copy r (nodes *_r) has the clamp at its lowest voltage (timing corner): it gives release_time;");
     w.comment("  copy p (nodes *_p) has the clamp at its highest voltage (peak corner): it gives peak_collector.");
     w.comment("");
     w.comment("Models are generic, written by coilfit from the parts table data; they are NOT vendor models.");
     for (std::size_t i = 1; i < p.drv.comments.size(); ++i) w.comment(p.drv.comments[i]);
-    w.comment(fmt::format("  diode {}, peak corner DPEAK: passes through the data's maximum drop {} V at {} A, N = {}", diode.id,
+    w.comment(fmt::format("  diode {}, peak corner DPEAK: passes through the data's maximum drop {} V at {} A, N = {}", display_id(diode),
                           num(p.vf_peak), num(p.i0), num(p.d_peak.n)));
     w.comment("    (N from the slope of the part's forward-voltage points around that current, else the default for its kind).");
-    w.comment(fmt::format("  diode {}, timing corner DLOW: passes through the low drop {} V at the release current {} A,", diode.id,
+    w.comment(fmt::format("  diode {}, timing corner DLOW: passes through the low drop {} V at the release current {} A,", display_id(diode),
                           num(p.vf_lo), num(p.i_rel)));
     w.comment(fmt::format("    N = {}, no series resistance: its drop stays at or above {} V while the current is above release.",
                           num(p.d_low.n), num(p.vf_lo)));
@@ -300,6 +298,8 @@ void write_models_and_analysis(Writer& w, const Plan& p) {
     w.line(fmt::format(".meas tran {} find i(vsense_r) at={}", meas_coil_current, secs(p.t_off)));
     w.line(fmt::format(".meas tran {} max v(c_p) from={} to={}", meas_peak_collector, secs(p.t_off), secs(p.t_stop)));
     w.line(fmt::format(".meas tran {} trig at={} targ i(vsense_r) val={} fall=1", meas_release_time, secs(p.t_off), num(p.i_rel)));
+    // An array channel's on-voltage is not negligible (a Vbe and more): measured for the report's Vce(sat).
+    if (p.spec->array()) w.line(fmt::format(".meas tran {} find v(c_r) at={}", meas_output_on, secs(p.t_off)));
     w.line(".end");
 }
 

@@ -18,10 +18,12 @@ namespace coilfit::io {
 inline constexpr std::string_view meas_coil_current = "coil_current_on";
 inline constexpr std::string_view meas_peak_collector = "peak_collector";
 inline constexpr std::string_view meas_release_time = "release_time";
+// An array channel's netlist also measures its on-voltage just before turn-off.
+inline constexpr std::string_view meas_output_on = "output_on";
 
 // The netlist text for the sized design in the report (it sizes nothing again). Throws InputError
 // when the design cannot be simulated meaningfully: no coil inductance, no clamp, or no drive
-// resistor.
+// resistor (an array channel's is built in).
 [[nodiscard]] std::string spice_netlist(const SizingReport& report);
 
 // With device_temperature the simulation runs at the cold corner's ambient (.options temp) and

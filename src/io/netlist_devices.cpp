@@ -16,6 +16,15 @@ constexpr double npn_br = 10.0;
 // The collector resistance gives an ohmic drop of this fraction of the data's Vce(sat) maximum.
 constexpr double npn_rc_fraction = 0.05;
 
+// A Darlington array channel of the 7- and 8-channel class (from memory, typical of the class;
+// the parts record does not give them): 7.2 kOhm from the first base to its emitter, 3 kOhm
+// across the output transistor's base-emitter junction, each transistor a gain of about 30 (the
+// pair about 900, near the class's guaranteed minimum of about 1000).
+constexpr double array_r_be1_ohm = 7.2e3;
+constexpr double array_r_be2_ohm = 3.0e3;
+constexpr double array_bf = 30.0;
+constexpr double array_br = 1.0;
+
 }  // namespace
 
 std::string num(double v) { return fmt::format("{:.6g}", v); }
@@ -115,6 +124,70 @@ DriverNetlist mosfet_netlist(const SizingReport& report) {
     d.element_templates.push_back("rgs_{0} g_{0} 0 " + num(rgs));
     d.element_templates.emplace_back("m_{0} c_{0} g_{0} 0 0 nsw l=1u w=1u");
     d.models.push_back(fmt::format(".model nsw nmos(level=1 vto={} kp={} lambda=0)", num(vto), num(kp)));
+    return d;
+}
+
+namespace {
+
+// The pin's Thevenin resistance, as the core takes it: (VDD_voh - VOH) / IOH, VDD_voh pin.voh_vdd
+// or the lowest VDD (src/method.md "Bipolar drivers"); SPICE resistors must not be zero.
+double pin_r_out(const Spec& spec) {
+    if (spec.pin.voh_v && spec.pin.voh_current_a && *spec.pin.voh_current_a > 0) {
+        const double vdd_voh = spec.pin.voh_vdd_v.value_or(spec.pin.vdd_v * (1.0 - spec.pin.vdd_tolerance));
+        return std::max(1e-3, (vdd_voh - *spec.pin.voh_v) / *spec.pin.voh_current_a);
+    }
+    return 1e-3;
+}
+
+}  // namespace
+
+DriverNetlist array_netlist(const SizingReport& report) {
+    const Spec& spec = report.spec;
+    const Conditions& c = report.sized.conditions;
+    const Evaluation& e = report.sized.worst;
+    const ArrayPart& a = *spec.array();
+    const ArrayCorner& f = std::get<ArrayFigures>(e.drive).at[0];
+    const double i0 = e.coil.at[0].current_max_a;
+    DriverNetlist d;
+    // Drive at its weakest: the pin at its low VDD behind its output resistance, the built-in
+    // input resistor at its high tolerance (default 20 %, src/method.md "Transistor-array channel").
+    d.drive_v = c.vdd_lo_v;
+    const double r_out = pin_r_out(spec);
+    const double t_in = a.input_resistor_tolerance.value_or(defaults::array_input_tolerance);
+    const double r_in = a.input_resistor_ohm * (1.0 + t_in);
+    d.comments.push_back(fmt::format("  input drive at its weakest: pin {} V (low VDD) behind {} ohm, the array's input resistor {} ohm at +{} % = {} ohm",
+                                     num(c.vdd_lo_v), num(r_out), num(a.input_resistor_ohm), num(100.0 * t_in), num(r_in)));
+    d.element_templates.push_back("rout_{0} pin pin_{0} " + num(r_out));
+    d.element_templates.push_back("rin_{0} pin_{0} b_{0} " + num(r_in));
+    if (a.structure == ArrayStructure::darlington) {
+        d.comments.push_back(fmt::format("  array channel {}: a Darlington pair, each NPN Gummel-Poon IS = {} A, BF = {}, BR = {}; {} ohm from the",
+                                         display_id(a), num(npn_is_a), num(array_bf), num(array_br), num(array_r_be1_ohm)));
+        d.comments.push_back(fmt::format("    first base to its emitter and {} ohm across the output transistor's base-emitter (typical of the",
+                                         num(array_r_be2_ohm)));
+        d.comments.emplace_back("    class, from memory). Its on-voltage is a Vbe plus the first transistor's Vce(sat): it must stay at or");
+        d.comments.push_back(fmt::format("    below the data's maximum Vce(sat) {} V at {} A, which the report takes off the coil's voltage.",
+                                         num(f.vce_sat.value), num(i0)));
+        d.element_templates.push_back("rbe1_{0} b_{0} e1_{0} " + num(array_r_be1_ohm));
+        d.element_templates.emplace_back("q1_{0} c_{0} b_{0} e1_{0} qarr");
+        d.element_templates.push_back("rbe2_{0} e1_{0} 0 " + num(array_r_be2_ohm));
+        d.element_templates.emplace_back("q2_{0} c_{0} e1_{0} 0 qarr");
+        d.models.push_back(fmt::format(".model qarr npn(is={} bf={} br={})", num(npn_is_a), num(array_bf), num(array_br)));
+        return d;
+    }
+    // The MOSFET class: the gate behind the input resistor (no gate current in a DC model), a
+    // level-1 NMOS whose on-resistance at the pin's low VDD is the data's Vce(sat) max / I0, placed
+    // as in mosfet_netlist(): VTO at most 1 V below the gate and low enough that the switch stays
+    // linear (overdrive at least 4 I0 Rds), KP = 1 / (Rds (Vov - I0 Rds / 2)), W = L.
+    const double rds = f.vce_sat.value / i0;
+    const double vgs = c.vdd_lo_v;
+    const double vto = std::max(0.1, std::min(vgs - 1.0, vgs - 4.0 * i0 * rds));
+    const double vov = std::max(vgs - vto, 1e-3);
+    const double kp = 1.0 / (rds * std::max(vov - 0.5 * i0 * rds, 0.25 * vov));
+    d.comments.push_back(fmt::format("  array channel {}: a level-1 NMOS, VTO = {} V, KP = {} A/V^2 (W = L): {} ohm on at {} V and {} A,",
+                                     display_id(a), num(vto), num(kp), num(rds), num(vgs), num(i0)));
+    d.comments.push_back(fmt::format("    the data's maximum on-voltage {} V at that current; no capacitances.", num(f.vce_sat.value)));
+    d.element_templates.emplace_back("m_{0} c_{0} b_{0} 0 0 narr l=1u w=1u");
+    d.models.push_back(fmt::format(".model narr nmos(level=1 vto={} kp={} lambda=0)", num(vto), num(kp)));
     return d;
 }
 

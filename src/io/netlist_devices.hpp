@@ -31,5 +31,8 @@ struct DriverNetlist {
 // device_temperature: the model's 25 °C gain with XTB (see NetlistOptions).
 [[nodiscard]] DriverNetlist bipolar_netlist(const SizingReport& report, bool device_temperature = false);
 [[nodiscard]] DriverNetlist mosfet_netlist(const SizingReport& report);
+// One channel of a transistor array: its input resistor, then a Darlington pair (or, for the
+// MOSFET class, a level-1 NMOS) to the output.
+[[nodiscard]] DriverNetlist array_netlist(const SizingReport& report);
 
 }  // namespace coilfit::io::netlist

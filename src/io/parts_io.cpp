@@ -1,6 +1,11 @@
 #include "io/parts_io.hpp"
 
+#include <sys/stat.h>
+#include <unistd.h>
+
 #include <algorithm>
+#include <cerrno>
+#include <cstring>
 #include <cstdlib>
 #include <filesystem>
 #include <map>
@@ -16,6 +21,56 @@ namespace {
 namespace fs = std::filesystem;
 
 constexpr std::size_t max_table_bytes = 8U << 20U;
+// All files of a parts folder together (the shipped table is about 60 kB).
+constexpr std::size_t max_folder_bytes = 32U << 20U;
+
+std::string folder_too_large(const std::string& shown) {
+    return fmt::format("{}: the parts files of this folder are larger than {} bytes together; this is not a coilfit parts table",
+                       shown, max_folder_bytes);
+}
+
+// What is wrong with an entry, in words: "a symbolic link loop", "cannot be read (permission denied)".
+std::string entry_problem(int err) {
+    if (err == ELOOP) return "a symbolic link loop";
+    if (err == EACCES) return "cannot be read (permission denied)";
+    std::string s = std::strerror(err);
+    if (!s.empty() && s[0] >= 'A' && s[0] <= 'Z') s[0] = static_cast<char>(s[0] - 'A' + 'a');
+    return "cannot be read (" + s + ")";
+}
+
+struct FolderFile {
+    std::string path;
+    std::uintmax_t size = 0;
+};
+
+// The *.json files of a parts folder, by name. Every entry named *.json must be a readable
+// regular file (or a link to one): a dangling link, a loop, a folder or a device so named is an
+// error that names it, never skipped in silence.
+std::vector<FolderFile> folder_files(const std::string& dir) {
+    std::error_code ec;
+    fs::directory_iterator it(dir, ec);
+    if (ec) throw InputError(printable(dir, 4096) + ": cannot list the folder (" + entry_problem(ec.value()) + ")");
+    std::vector<FolderFile> files;
+    for (; it != fs::directory_iterator(); it.increment(ec)) {
+        const fs::path p = it->path();
+        if (p.extension() != ".json") continue;
+        const std::string name = p.string();
+        const std::string shown = printable(name, 4096);
+        struct stat st{};
+        if (::stat(name.c_str(), &st) != 0) {
+            const int err = errno;
+            if (err == ENOENT) throw InputError(shown + ": a symbolic link to nothing in the parts folder; remove it or fix its target");
+            throw InputError(shown + ": " + entry_problem(err) + " in the parts folder");
+        }
+        if (S_ISDIR(st.st_mode)) throw InputError(shown + ": a folder named *.json in the parts folder; parts files are files");
+        if (!S_ISREG(st.st_mode)) throw InputError(shown + ": not a regular file, in the parts folder");
+        if (::access(name.c_str(), R_OK) != 0) throw InputError(shown + ": " + entry_problem(errno) + " in the parts folder");
+        files.push_back({name, static_cast<std::uintmax_t>(st.st_size)});
+    }
+    if (ec) throw InputError(printable(dir, 4096) + ": cannot list the folder (" + entry_problem(ec.value()) + ")");
+    std::sort(files.begin(), files.end(), [](const FolderFile& a, const FolderFile& b) { return a.path < b.path; });
+    return files;
+}
 
 }  // namespace
 
@@ -25,10 +80,22 @@ const Preset* PartsTable::find_preset(std::string_view kind, std::string_view id
     return it == presets.end() ? nullptr : &*it;
 }
 
+const RelayEntry* PartsTable::find_relay(std::string_view id) const {
+    const auto it = std::find_if(relays.begin(), relays.end(), [&](const RelayEntry& r) { return r.record.id == id; });
+    return it == relays.end() ? nullptr : &*it;
+}
+
+std::vector<RelayRecord> PartsTable::relay_records() const {
+    std::vector<RelayRecord> out;
+    out.reserve(relays.size());
+    for (const RelayEntry& r : relays) out.push_back(r.record);
+    return out;
+}
+
 namespace {
 
 constexpr std::string_view known_kinds =
-    "npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil or pin";
+    "npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor";
 
 Preset read_preset(ObjectReader& r, const Json& record, const std::string& kind, const Origin& origin, const std::string& path) {
     Preset p;
@@ -62,6 +129,7 @@ std::string read_record(ObjectReader& r, const Json& record, const std::string& 
     if (kind == "zener") return cat.zeners.emplace_back(read_zener(r)).id;
     if (kind == "tvs") return cat.tvs.emplace_back(read_tvs(r)).id;
     if (kind == "coil" || kind == "pin") return table.presets.emplace_back(read_preset(r, record, kind, origin, path)).id;
+    if (kind == "relay" || kind == "contactor") return table.relays.emplace_back(read_relay(r, record)).record.id;
     r.fail_at("kind", fmt::format("unknown kind \"{}\"; expected {}", printable(kind), known_kinds));
 }
 
@@ -73,9 +141,9 @@ void note_ids(const std::vector<T>& records, std::map<std::string, std::string>&
 }  // namespace
 
 void parse_parts_text(std::string_view text, const std::string& file, PartsTable& into) {
-    const Json doc = parse_json(text, file, max_table_bytes, "a JSON list [ ... ] of part records");
     Origin origin;
-    origin.file = file;
+    origin.file = printable(file, 4096);  // a file name echoed in messages, escaped
+    const Json doc = parse_json(text, origin.file, max_table_bytes, "a JSON list [ ... ] of part records");
     if (!doc.is_array()) fail(origin, "", "expected a JSON list [ ... ] of part records, got " + describe(doc));
     // Read into a copy and commit at the end: a file with an error adds nothing.
     PartsTable table = into;
@@ -89,6 +157,7 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
     note_ids(cat.zeners, ids);
     note_ids(cat.tvs, ids);
     note_ids(table.presets, ids);
+    for (const RelayEntry& rel : table.relays) ids[rel.record.id] = "an earlier file";
     for (std::size_t i = 0; i < doc.size(); ++i) {
         const std::string path = "[" + std::to_string(i) + "]";
         ObjectReader r(doc[i], origin, path);
@@ -98,7 +167,7 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
         const std::string id = read_record(r, doc[i], kind_j->get<std::string>(), origin, path, table);
         r.finish();
         const auto [it, inserted] = ids.emplace(id, path);
-        if (!inserted) r.fail_at("id", "duplicate id \"" + id + "\" (also at " + it->second + ")");
+        if (!inserted) r.fail_at("id", "duplicate id \"" + printable(id) + "\" (also at " + it->second + ")");
     }
     table.files.push_back(file);
     into = std::move(table);
@@ -106,20 +175,33 @@ void parse_parts_text(std::string_view text, const std::string& file, PartsTable
 
 PartsTable load_parts(const std::string& path) {
     PartsTable table;
-    std::error_code ec;
-    if (fs::is_directory(path, ec)) {
-        std::vector<std::string> files;
-        for (const auto& entry : fs::directory_iterator(path, ec)) {
-            if (entry.is_regular_file() && entry.path().extension() == ".json") files.push_back(entry.path().string());
+    const std::string shown = printable(path, 4096);
+    if (path.empty()) throw InputError("the parts table: expected a file or folder name, got an empty text");
+    struct stat st{};
+    if (::stat(path.c_str(), &st) != 0) {
+        const int err = errno;
+        struct stat lst{};
+        if (err == ENOENT && ::lstat(path.c_str(), &lst) == 0 && S_ISLNK(lst.st_mode)) {
+            throw InputError(shown + ": a symbolic link to nothing (its target does not exist)");
         }
-        if (ec) throw InputError(path + ": cannot list the folder: " + ec.message());
-        std::sort(files.begin(), files.end());
-        if (files.empty()) throw InputError(path + ": no parts files (*.json) in this folder");
-        for (const auto& f : files) parse_parts_text(read_text(f, max_table_bytes), f, table);
-    } else if (fs::exists(path, ec)) {
+        if (err == ENOENT || err == ENOTDIR) throw InputError(shown + ": no such parts file or folder");
+        throw InputError(shown + ": " + entry_problem(err));
+    }
+    if (!S_ISDIR(st.st_mode)) {
         parse_parts_text(read_text(path, max_table_bytes), path, table);
-    } else {
-        throw InputError(path + ": no such parts file or folder");
+        return table;
+    }
+    const std::vector<FolderFile> files = folder_files(path);
+    if (files.empty()) throw InputError(shown + ": no parts files (*.json) in this folder");
+    std::uintmax_t total = 0;
+    for (const auto& f : files) total += f.size;
+    if (total > max_folder_bytes) throw InputError(folder_too_large(shown));
+    std::size_t read = 0;
+    for (const auto& f : files) {
+        std::string text = read_text(f.path, max_table_bytes);
+        read += text.size();  // what was read, not what stat said: a file may grow
+        if (read > max_folder_bytes) throw InputError(folder_too_large(shown));
+        parse_parts_text(text, f.path, table);
     }
     return table;
 }

@@ -22,9 +22,13 @@ struct Preset {
 struct PartsTable {
     Catalogue catalogue;
     std::vector<Preset> presets;
+    std::vector<RelayEntry> relays;  // relay and contactor records
     std::vector<std::string> files;  // the files read, in order
 
     [[nodiscard]] const Preset* find_preset(std::string_view kind, std::string_view id) const;
+    [[nodiscard]] const RelayEntry* find_relay(std::string_view id) const;
+    // The relay records alone, for pick.
+    [[nodiscard]] std::vector<RelayRecord> relay_records() const;
 };
 
 // Reads a file or every *.json file of a folder (by name). Any error rejects the whole table.

@@ -6,6 +6,7 @@
 #pragma once
 
 #include "coilfit/parts.hpp"
+#include "coilfit/spec.hpp"
 #include "io/json_read.hpp"
 
 namespace coilfit::io {
@@ -19,6 +20,15 @@ enum class RecordPlace { table, inline_spec };
 [[nodiscard]] Diode read_diode(ObjectReader& r, RecordPlace place = RecordPlace::table);
 [[nodiscard]] Zener read_zener(ObjectReader& r, RecordPlace place = RecordPlace::table);
 [[nodiscard]] Tvs read_tvs(ObjectReader& r, RecordPlace place = RecordPlace::table);
+// A relay or contactor record (parts_read_relay.cpp): the coil fields as written, which a spec's
+// `coil` beside its `relay` overrides, and the record read (an inline record's coil may leave
+// fields to the spec's `coil`).
+struct RelayEntry {
+    RelayRecord record;
+    Json coil_fields = Json::object();
+};
+[[nodiscard]] RelayEntry read_relay(ObjectReader& r, const Json& record, RecordPlace place = RecordPlace::table);
+[[nodiscard]] Json to_json(const RelayPart& p);
 // A transistor of any kind, by its `kind` (npn, darlington, nmos, array).
 [[nodiscard]] Transistor read_transistor(ObjectReader& r, RecordPlace place = RecordPlace::table);
 

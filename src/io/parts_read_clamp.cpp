@@ -27,7 +27,7 @@ Diode read_diode(ObjectReader& r, RecordPlace place) {
     else if (kind == "fast") d.kind = DiodeKind::fast;
     else if (kind == "signal") d.kind = DiodeKind::signal;
     else if (kind == "schottky") d.kind = DiodeKind::schottky;
-    else r.fail_at("kind", "expected \"rectifier\", \"fast\", \"signal\" or \"schottky\", got \"" + kind + "\"");
+    else r.fail_at("kind", "expected \"rectifier\", \"fast\", \"signal\" or \"schottky\", got \"" + printable(kind) + "\"");
     d.vrrm_v = voltage(r, "vrrm", 1.0, 1e4);
     d.if_avg_a = r.within("if_avg", r.positive("if_avg", r.required("if_avg", Unit::ampere)), 1e-6, 1e3);
     if (auto v = r.quantity("ifrm", Unit::ampere)) d.ifrm_a = current(r, "ifrm", *v);
@@ -42,7 +42,7 @@ Zener read_zener(ObjectReader& r, RecordPlace place) {
     Zener z;
     z.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind != "zener") r.fail_at("kind", "expected \"zener\", got \"" + kind + "\"");
+    if (kind != "zener") r.fail_at("kind", "expected \"zener\", got \"" + printable(kind) + "\"");
     z.vz_v = voltage(r, "vz", 1.0, 1000.0);
     z.tolerance = r.fraction("tolerance", r.quantity("tolerance", Unit::ratio).value_or(0.05), 0.0, 0.5, true);
     z.pd_w = r.within("pd", r.positive("pd", r.required("pd", Unit::watt)), 1e-3, 1e3);
@@ -67,7 +67,7 @@ Tvs read_tvs(ObjectReader& r, RecordPlace place) {
     Tvs t;
     t.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind != "tvs") r.fail_at("kind", "expected \"tvs\", got \"" + kind + "\"");
+    if (kind != "tvs") r.fail_at("kind", "expected \"tvs\", got \"" + printable(kind) + "\"");
     t.vrwm_v = voltage(r, "vrwm", 1.0, 1000.0);
     {
         const Json* bj = r.get("vbr");

@@ -11,7 +11,9 @@ double voltage(ObjectReader& r, const std::string& key, double lo, double hi) {
 std::string read_id(ObjectReader& r) {
     std::string id = r.required_text("id", 64);
     if (id.empty()) r.fail_at("id", "expected an id such as \"2N4401\", got an empty text");
-    if (id.front() == ' ' || id.back() == ' ') r.fail_at("id", "expected an id without spaces at either end, got \"" + id + "\"");
+    if (id.front() == ' ' || id.back() == ' ') r.fail_at("id", "expected an id without spaces at either end, got \"" + printable(id) + "\"");
+    // An id with a no-break or zero-width space would look like another part's id.
+    if (has_invisible(id)) r.fail_at("id", "expected an id without invisible characters, got \"" + printable(id) + "\"");
     return id;
 }
 
@@ -30,7 +32,11 @@ void origin_json(const PartOrigin& o, Json& j) {
     j["package"] = o.package;
     j["description"] = o.description;
     j["source"] = o.source;
-    if (o.inline_record) j["inline"] = true;
+    if (o.inline_record) {
+        // Labelled as in every other output, so that it never passes for the table's record.
+        j["inline"] = true;
+        j["label"] = display_id(o);
+    }
 }
 
 void read_thermal(ObjectReader& r, double& pd_w, std::optional<double>& rth, double& tj_max_c) {

@@ -58,7 +58,7 @@ Bipolar read_bipolar(ObjectReader& r, RecordPlace place) {
     const std::string kind = r.required_text("kind", 32);
     if (kind == "npn") p.kind = BipolarKind::npn;
     else if (kind == "darlington") p.kind = BipolarKind::darlington;
-    else r.fail_at("kind", "expected \"npn\" or \"darlington\", got \"" + kind + "\"");
+    else r.fail_at("kind", "expected \"npn\" or \"darlington\", got \"" + printable(kind) + "\"");
     p.ic_max_a = r.within("ic_max", r.positive("ic_max", r.required("ic_max", Unit::ampere)), 1e-6, 1e3);
     p.vceo_v = voltage(r, "vceo", 1.0, 1e4);
     p.hfe_min = read_points<GainPoint>(r, "hfe_min", read_gain, true);
@@ -80,7 +80,7 @@ Mosfet read_mosfet(ObjectReader& r, RecordPlace place) {
     Mosfet m;
     m.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind != "nmos") r.fail_at("kind", "expected \"nmos\", got \"" + kind + "\"");
+    if (kind != "nmos") r.fail_at("kind", "expected \"nmos\", got \"" + printable(kind) + "\"");
     m.vds_max_v = voltage(r, "vds_max", 1.0, 1e4);
     m.id_max_a = r.within("id_max", r.positive("id_max", r.required("id_max", Unit::ampere)), 1e-6, 1e3);
     m.vgs_max_v = voltage(r, "vgs_max", 1.0, 100.0);
@@ -114,11 +114,11 @@ ArrayPart read_array(ObjectReader& r, RecordPlace place) {
     ArrayPart a;
     a.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind != "array") r.fail_at("kind", "expected \"array\", got \"" + kind + "\"");
+    if (kind != "array") r.fail_at("kind", "expected \"array\", got \"" + printable(kind) + "\"");
     const std::string structure = r.text("structure", 32).value_or("darlington");
     if (structure == "darlington") a.structure = ArrayStructure::darlington;
     else if (structure == "mosfet") a.structure = ArrayStructure::mosfet;
-    else r.fail_at("structure", "expected \"darlington\" or \"mosfet\", got \"" + structure + "\"");
+    else r.fail_at("structure", "expected \"darlington\" or \"mosfet\", got \"" + printable(structure) + "\"");
     const double channels = r.within("channels", r.required("channels", Unit::number), 1.0, 64.0);
     if (channels != std::floor(channels)) r.fail_at("channels", "expected a whole number of channels");
     a.channels = static_cast<int>(channels);

@@ -1,5 +1,6 @@
 #include <cmath>
 
+#include "io/report_contact_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
 
@@ -11,6 +12,21 @@ Json number_or_null(const std::optional<double>& v) {
 }
 
 }  // namespace
+
+Json check_to_json(const Check& c) {
+    Json cj;
+    cj["id"] = c.id;
+    cj["verdict"] = verdict_name(c.verdict);
+    cj["value"] = number_or_null(c.value);
+    cj["limit"] = number_or_null(c.limit);
+    cj["unit"] = unit_symbol(c.unit);
+    cj["margin"] = number_or_null(c.margin);
+    cj["message"] = c.message;
+    if (c.verdict == Verdict::skip) cj["reason"] = c.reason;
+    else cj["corner"] = c.corner == Corner::cold ? "cold" : "hot";
+    if (c.beyond_data) cj["beyond_data"] = true;
+    return cj;
+}
 
 Json report_to_json(const SizingReport& report) {
     const Spec& spec = report.spec;
@@ -25,20 +41,7 @@ Json report_to_json(const SizingReport& report) {
     }
     j["quantities"] = q;
     Json checks = Json::array();
-    for (const auto& c : report.checks) {
-        Json cj;
-        cj["id"] = c.id;
-        cj["verdict"] = verdict_name(c.verdict);
-        cj["value"] = number_or_null(c.value);
-        cj["limit"] = number_or_null(c.limit);
-        cj["unit"] = unit_symbol(c.unit);
-        cj["margin"] = number_or_null(c.margin);
-        cj["message"] = c.message;
-        if (c.verdict == Verdict::skip) cj["reason"] = c.reason;
-        else cj["corner"] = c.corner == Corner::cold ? "cold" : "hot";
-        if (c.beyond_data) cj["beyond_data"] = true;
-        checks.push_back(cj);
-    }
+    for (const auto& c : report.checks) checks.push_back(check_to_json(c));
     j["checks"] = checks;
     j["notes"] = report.notes;
     j["cautions"] = report.cautions;
@@ -66,6 +69,7 @@ Json report_to_json(const SizingReport& report) {
     }
     j["driver"] = transistor_kind_name(spec.transistor);
     j["clamp_options"] = options;
+    if (report.contact) j["contact"] = contact_to_json(*report.contact);
     return j;
 }
 

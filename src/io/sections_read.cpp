@@ -2,6 +2,8 @@
 
 #include <fmt/format.h>
 
+#include "io/plausible.hpp"
+
 namespace coilfit::io {
 namespace {
 
@@ -45,6 +47,22 @@ void read_heating(ObjectReader& r, CoilSpec& c) {
     if (auto v = r.quantity("max_temperature", Unit::celsius)) c.max_temperature_c = temperature(r, "max_temperature", *v, 20.0, 250.0);
 }
 
+// The rated coil current, rated voltage over resistance, must be a plausible coil current: a
+// resistance typed in kΩ as a plain number ("0.4" for 400 Ω) gives tens of amperes.
+void coil_current(const ObjectReader& r, const CoilSpec& c) {
+    const PlausibleRange& range = plausible_range(Plausible::coil_current);
+    const double i = c.rated_voltage_v / c.resistance_ohm;
+    if (i >= range.lo && i <= range.hi) return;
+    const PlausibleRange& res = plausible_range(Plausible::coil_resistance);
+    const PlausibleRange as_current{Plausible::coil_resistance, res.noun, Unit::ohm, c.rated_voltage_v / range.hi,
+                                    c.rated_voltage_v / range.lo};
+    const std::string hint = plausible_suggestion(c.resistance_ohm, as_current);
+    r.fail_at("resistance", fmt::format("{} across {} is {}, not a plausible coil current ({} to {}){}",
+                                        format_quantity(c.rated_voltage_v, Unit::volt, 6), format_quantity(c.resistance_ohm, Unit::ohm, 6),
+                                        format_quantity(i, Unit::ampere), format_quantity(range.lo, Unit::ampere),
+                                        format_quantity(range.hi, Unit::ampere), hint.empty() ? std::string() : "; did you mean " + hint + "?"));
+}
+
 }  // namespace
 
 std::string percent_words(double x) { return fmt::format("{:g} %", x * 100.0); }
@@ -61,9 +79,10 @@ void read_coil(ObjectReader& r, CoilSpec& c, std::vector<std::string>& defaults,
     if (partial && r.has("preset")) r.fail_at("preset", "expected no preset inside a preset");
     if (auto p = r.text("preset", 64)) c.preset = *p;
     if (auto v = needed(r, "rated_voltage", Unit::volt, partial)) {
-        c.rated_voltage_v = r.within("rated_voltage", r.positive("rated_voltage", *v), 0.1, 1000.0);
+        c.rated_voltage_v = plausible(r, "rated_voltage", r.positive("rated_voltage", *v), Plausible::supply_voltage);
     }
-    if (auto v = needed(r, "resistance", Unit::ohm, partial)) c.resistance_ohm = r.within("resistance", r.positive("resistance", *v), 0.01, 1e7);
+    if (auto v = needed(r, "resistance", Unit::ohm, partial)) c.resistance_ohm = plausible(r, "resistance", r.positive("resistance", *v), Plausible::coil_resistance);
+    if (!partial || (r.has("rated_voltage") && r.has("resistance"))) coil_current(r, c);
     if (auto v = r.quantity("tolerance", Unit::ratio)) c.tolerance = r.fraction("tolerance", *v, 0.0, 0.5, true);
     else defaults.push_back("coil.tolerance " + percent_words(c.tolerance) + " (common practice)");
     if (auto v = r.quantity("reference_temp", Unit::celsius)) c.reference_temp_c = temperature(r, "reference_temp", *v, -55.0, 125.0);
@@ -73,7 +92,7 @@ void read_coil(ObjectReader& r, CoilSpec& c, std::vector<std::string>& defaults,
     if (!c.self_heating_k && !c.thermal_resistance_k_per_w) defaults.push_back("coil.self_heating 0 K");
     if (auto v = r.quantity("inductance", Unit::henry)) c.inductance_h = r.within("inductance", r.positive("inductance", *v), 1e-6, 1e4);
     if (auto v = r.quantity("max_voltage", Unit::volt)) {
-        c.max_voltage_v = r.within("max_voltage", r.positive("max_voltage", *v), 0.1, 1000.0);
+        c.max_voltage_v = plausible(r, "max_voltage", r.positive("max_voltage", *v), Plausible::supply_voltage);
         // Below the rated voltage is a typo: the coil could not be run at its own rating.
         if ((!partial || r.has("rated_voltage")) && *c.max_voltage_v < c.rated_voltage_v) {
             r.fail_at("max_voltage", fmt::format("expected at least coil.rated_voltage {}, got {}", volts(c.rated_voltage_v),
@@ -88,11 +107,11 @@ void read_coil(ObjectReader& r, CoilSpec& c, std::vector<std::string>& defaults,
 void read_pin(ObjectReader& r, PinSpec& p, std::vector<std::string>& defaults, bool partial) {
     if (partial && r.has("preset")) r.fail_at("preset", "expected no preset inside a preset");
     if (auto v = r.text("preset", 64)) p.preset = *v;
-    if (auto v = needed(r, "vdd", Unit::volt, partial)) p.vdd_v = r.within("vdd", r.positive("vdd", *v), 0.5, 60.0);
+    if (auto v = needed(r, "vdd", Unit::volt, partial)) p.vdd_v = plausible(r, "vdd", r.positive("vdd", *v), Plausible::pin_voltage);
     if (auto v = r.quantity("vdd_tolerance", Unit::ratio)) p.vdd_tolerance = r.fraction("vdd_tolerance", *v, 0.0, 0.5, true);
     else defaults.push_back("pin.vdd_tolerance " + percent_words(p.vdd_tolerance));
     if (auto v = needed(r, "max_current", Unit::ampere, partial)) {
-        p.max_current_a = r.within("max_current", r.positive("max_current", *v), 1e-6, 10.0);
+        p.max_current_a = plausible(r, "max_current", r.positive("max_current", *v), Plausible::pin_current);
     }
     if (auto v = r.quantity("voh", Unit::volt)) {
         if (!(*v > 0)) r.fail_at("voh", fmt::format("expected a voltage greater than zero, got {}", volts(*v)));
@@ -101,8 +120,8 @@ void read_pin(ObjectReader& r, PinSpec& p, std::vector<std::string>& defaults, b
         }
         p.voh_v = *v;
     }
-    if (auto v = r.quantity("voh_current", Unit::ampere)) p.voh_current_a = r.within("voh_current", r.positive("voh_current", *v), 1e-6, 10.0);
-    if (auto v = r.quantity("voh_vdd", Unit::volt)) p.voh_vdd_v = r.within("voh_vdd", r.positive("voh_vdd", *v), 0.5, 60.0);
+    if (auto v = r.quantity("voh_current", Unit::ampere)) p.voh_current_a = plausible(r, "voh_current", r.positive("voh_current", *v), Plausible::pin_current);
+    if (auto v = r.quantity("voh_vdd", Unit::volt)) p.voh_vdd_v = plausible(r, "voh_vdd", r.positive("voh_vdd", *v), Plausible::pin_voltage);
     if (!partial) {
         if (p.voh_v && !p.voh_current_a) r.fail_at("voh_current", "missing; pin.voh needs the current it is rated at, such as \"8mA\"");
         if (p.voh_current_a && !p.voh_v) r.fail_at("voh", "missing; pin.voh_current needs the voltage rated at it, such as \"2.9V\"");

@@ -1,7 +1,11 @@
 // Spec files (schema "coilfit.spec/1") and command-line overrides into a validated Spec.
 #include <fmt/format.h>
+#include <fmt/ranges.h>
+
+#include "coilfit/id_match.hpp"
 
 #include "io/parts_read.hpp"
+#include "io/plausible.hpp"
 #include "io/sections_read.hpp"
 #include "io/spec_io.hpp"
 #include "io/spec_read_parts.hpp"
@@ -17,10 +21,17 @@ Json with_preset(const Json& obj, const std::string& kind, const PartsTable& tab
     if (!obj.is_object() || !obj.contains("preset")) return obj;
     const Json& id = obj.at("preset");
     if (!id.is_string()) fail(origin, path + ".preset", "expected a preset id in quotes, got " + describe(id));
-    const Preset* p = table.find_preset(kind, id.get<std::string>());
+    std::vector<std::string> ids;
+    for (const Preset& pr : table.presets) {
+        if (pr.kind == kind) ids.push_back(pr.id);
+    }
+    const IdMatch m = match_id(id.get<std::string>(), ids);
+    const Preset* p = m.id ? table.find_preset(kind, *m.id) : nullptr;
     if (!p) {
-        fail(origin, path + ".preset", fmt::format("no {} preset {} in the parts table; `coilfit parts {}` lists them", kind,
-                                                   describe(id), kind));
+        const auto near = nearest_ids(id.get<std::string>(), ids);
+        fail(origin, path + ".preset", fmt::format("no {} preset {} in the parts table{}; `coilfit parts {}` lists them", kind,
+                                                   describe(id), near.empty() ? std::string() : "; nearest: " + fmt::format("{}", fmt::join(near, ", ")),
+                                                   kind));
     }
     Json merged = p->fields;
     for (const auto& [k, v] : obj.items()) merged[k] = v;
@@ -32,14 +43,14 @@ void read_supply(ObjectReader& r, Spec& s) {
     const bool band = r.has("min") || r.has("max");
     if (band) {
         // An asymmetric band (a vehicle's 9 V to 16 V): min and max; the nominal is optional.
-        sup.min_v = r.within("min", r.positive("min", r.required("min", Unit::volt)), 0.1, 1000.0);
-        sup.max_v = r.within("max", r.positive("max", r.required("max", Unit::volt)), 0.1, 1000.0);
+        sup.min_v = plausible(r, "min", r.positive("min", r.required("min", Unit::volt)), Plausible::supply_voltage);
+        sup.max_v = plausible(r, "max", r.positive("max", r.required("max", Unit::volt)), Plausible::supply_voltage);
         if (*sup.min_v > *sup.max_v) {
             r.fail_at("min", fmt::format("expected at most supply.max {}, got {}", volts(*sup.max_v), volts(*sup.min_v)));
         }
         if (r.has("tolerance")) r.fail_at("tolerance", "given with supply.min and supply.max; give the band or a tolerance");
         if (auto v = r.quantity("voltage", Unit::volt)) {
-            sup.voltage_v = r.within("voltage", r.positive("voltage", *v), 0.1, 1000.0);
+            sup.voltage_v = plausible(r, "voltage", r.positive("voltage", *v), Plausible::supply_voltage);
             if (sup.voltage_v < *sup.min_v || sup.voltage_v > *sup.max_v) {
                 r.fail_at("voltage", fmt::format("expected a nominal within supply.min {} to supply.max {}, got {}",
                                                  volts(*sup.min_v), volts(*sup.max_v), volts(sup.voltage_v)));
@@ -47,7 +58,7 @@ void read_supply(ObjectReader& r, Spec& s) {
         }
         sup.tolerance = 0;
     } else {
-        sup.voltage_v = r.within("voltage", r.positive("voltage", r.required("voltage", Unit::volt)), 0.1, 1000.0);
+        sup.voltage_v = plausible(r, "voltage", r.positive("voltage", r.required("voltage", Unit::volt)), Plausible::supply_voltage);
         if (auto t = r.quantity("tolerance", Unit::ratio)) sup.tolerance = r.fraction("tolerance", *t, 0.0, 0.5, true);
         else s.defaults_used.push_back("supply.tolerance " + percent_words(sup.tolerance));
     }
@@ -100,8 +111,8 @@ void read_section(ObjectReader& top, const SpecDocument& d, const std::string& k
 
 SpecDocument parse_spec_text(std::string_view text, const std::string& file) {
     SpecDocument d;
-    d.origin.file = file;
-    d.doc = parse_json(text, file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
+    d.origin.file = printable(file, 4096);  // a file name echoed in messages, escaped
+    d.doc = parse_json(text, d.origin.file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
     if (!d.doc.is_object()) fail(d.origin, "", "expected a JSON object { \"schema\": \"coilfit.spec/1\", ... }, got " + describe(d.doc));
     return d;
 }
@@ -143,10 +154,43 @@ void prune_clamp_fields(SpecDocument& d, const std::string& type) {
     for (const auto& key : drop) clamp->erase(key);
 }
 
+// Fields that exclude each other: a flag setting one replaces the file's other (an asymmetric
+// band from --supply-min on a file with a tolerance, --coil-thermal-resistance on a file with
+// self_heating), unless a flag of this run set it.
+void prune_exclusive(SpecDocument& d, const std::string& dotted_path) {
+    static const std::pair<const char*, const char*> exclusive[] = {
+        {"supply.min", "supply.tolerance"},       {"supply.max", "supply.tolerance"},
+        {"supply.tolerance", "supply.min"},       {"supply.tolerance", "supply.max"},
+        {"coil.thermal_resistance", "coil.self_heating"}, {"coil.self_heating", "coil.thermal_resistance"},
+    };
+    for (const auto& [set, drop] : exclusive) {
+        if (dotted_path != set || d.origin.flags.count(drop) != 0) continue;
+        const std::string path = drop;
+        const auto dot = path.find('.');
+        Json* section = d.doc.contains(path.substr(0, dot)) ? &d.doc[path.substr(0, dot)] : nullptr;
+        if (section && section->is_object()) section->erase(path.substr(dot + 1));
+    }
+}
+
+// A relay given by flag replaces the file's coil: the fields that describe the coil itself go
+// (a flag of this run that set one stays); the application's own (self_heating,
+// max_release_time) stay beside the relay.
+void prune_coil_fields(SpecDocument& d) {
+    Json* coil = d.doc.contains("coil") && d.doc["coil"].is_object() ? &d.doc["coil"] : nullptr;
+    if (!coil) return;
+    std::vector<std::string> drop;
+    for (const auto& [key, value] : coil->items()) {
+        if (key != "self_heating" && key != "max_release_time" && d.origin.flags.count("coil." + key) == 0) drop.push_back(key);
+    }
+    for (const auto& key : drop) coil->erase(key);
+}
+
 }  // namespace
 
 void set_field(SpecDocument& d, const std::string& dotted_path, Json value, const std::string& flag) {
     if (dotted_path == "clamp.type" && value.is_string()) prune_clamp_fields(d, value.get<std::string>());
+    prune_exclusive(d, dotted_path);
+    if (dotted_path == "relay") prune_coil_fields(d);
     Json* node = &d.doc;
     std::size_t start = 0;
     std::string path;
@@ -185,7 +229,19 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
         (void)top.get("ambient");
         s.defaults_used.push_back(fmt::format("ambient {:g} °C to {:g} °C", s.ambient.min_c, s.ambient.max_c));
     }
-    if (const Json* j = section(top, d, "coil", true)) {
+    if (auto relay = spec_parts::read_relay_field(top, table)) {
+        // The relay's coil fields, then the spec's `coil` fields beside it win.
+        Json merged = relay->coil_fields;
+        if (const Json* j = top.get("coil")) {
+            if (!j->is_object()) fail(d.origin, "coil", "expected an object of coil fields beside relay, got " + describe(*j));
+            if (j->contains("preset")) fail(d.origin, "coil.preset", "given with relay; the relay's record fills the coil");
+            for (const auto& [k, v] : j->items()) merged[k] = v;
+        }
+        ObjectReader r(merged, d.origin, "coil");
+        read_coil(r, s.coil, s.defaults_used);
+        r.finish();
+        s.relay = static_cast<const RelayPart&>(relay->record);
+    } else if (const Json* j = section(top, d, "coil", true)) {
         const Json merged = with_preset(*j, "coil", table, d.origin, "coil");
         ObjectReader r(merged, d.origin, "coil");
         read_coil(r, s.coil, s.defaults_used);

@@ -113,11 +113,18 @@ Json spec_to_json(const Spec& s) {
     j["policy"] = policy_json(s.policy);
     j["switching"] = {{"frequency", opt(s.switching.frequency_hz)}, {"duty", s.switching.duty}};
     if (s.load) {
-        j["load"] = {{"voltage", s.load->voltage_v}, {"kind", s.load->kind == LoadKind::ac ? "ac" : "dc"},
-                     {"current", opt(s.load->current_a)}};
+        const LoadSpec& l = *s.load;
+        j["load"] = {{"voltage", l.voltage_v},
+                     {"type", l.kind == LoadKind::ac ? "ac" : "dc"},
+                     {"kind", load_class_name(l.load_class)},
+                     {"current", opt(l.current_a)},
+                     {"inrush", opt(load_inrush_a(l))},
+                     {"power_factor", opt(l.power_factor)},
+                     {"time_constant", opt(l.time_constant_s)}};
     } else {
         j["load"] = nullptr;
     }
+    j["relay"] = s.relay ? to_json(*s.relay) : Json(nullptr);
     return j;
 }
 

@@ -5,6 +5,9 @@
 //   pick over the table (ms)        pick() with every transistor and diode of parts/
 //   one-shot `coilfit size` (ms)    a whole process: start, read table and spec, size, print;
 //                                   against starting /bin/true (the cost of any process)
+//   64-channel board (ms)           size_board() of tests/data/board_64.json: every channel sized
+//                                   and the board's shared checks (issue 14: goal under 20 ms),
+//                                   and the same with reading the board file
 //
 // Goals (issue 6): evaluation well under 1 us, at least 5 million yield samples a second on one
 // core, pick under 50 ms. This program reports; it fails nothing. On a shared machine run it with
@@ -23,9 +26,11 @@
 #include <thread>
 #include <vector>
 
+#include "coilfit/board.hpp"
 #include "coilfit/pick.hpp"
 #include "coilfit/sizing.hpp"
 #include "coilfit/yield.hpp"
+#include "io/board_io.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
 
@@ -137,6 +142,43 @@ void bm_process_size(benchmark::State& state) {
 }
 BENCHMARK(bm_process_size)->Name("process/coilfit_size")->Unit(benchmark::kMillisecond)->UseRealTime();
 
+// The 64-channel board: 64 entries of their own (no repeat is sized once for another).
+struct BoardFixture {
+    io::PartsTable table = io::load_parts(COILFIT_BENCH_PARTS_DIR);
+    io::BoardDocument document = io::load_board_document(COILFIT_BENCH_BOARD);
+    Board board = io::read_board(document, table);
+};
+
+const BoardFixture& board_fixture() {
+    static const BoardFixture f;
+    return f;
+}
+
+void bm_board(benchmark::State& state) {
+    const BoardFixture& f = board_fixture();
+    for (auto _ : state) {
+        BoardReport r = size_board(f.board, f.table.catalogue);
+        benchmark::DoNotOptimize(r);
+    }
+    state.counters["channels"] = static_cast<double>(f.board.channels.size());
+}
+BENCHMARK(bm_board)->Name("board/size_64")->Unit(benchmark::kMillisecond);
+
+void bm_board_read(benchmark::State& state) {
+    const BoardFixture& f = board_fixture();
+    for (auto _ : state) {
+        BoardReport r = size_board(io::read_board(f.document, f.table), f.table.catalogue);
+        benchmark::DoNotOptimize(r);
+    }
+}
+BENCHMARK(bm_board_read)->Name("board/read_and_size_64")->Unit(benchmark::kMillisecond);
+
+void bm_process_board(benchmark::State& state) {
+    const std::vector<std::string> argv{COILFIT_BENCH_EXE, "board", COILFIT_BENCH_BOARD, "--parts", COILFIT_BENCH_PARTS_DIR};
+    for (auto _ : state) run_process(argv);
+}
+BENCHMARK(bm_process_board)->Name("process/coilfit_board_64")->Unit(benchmark::kMillisecond)->UseRealTime();
+
 void bm_process_true(benchmark::State& state) {
     const std::vector<std::string> argv{"/bin/true"};
     for (auto _ : state) run_process(argv);
@@ -195,6 +237,12 @@ int main(int argc, char** argv) {
     if (has("pick/whole_table"))
         std::printf("  pick over the table          %8.2f ms (%.0f combinations)\n", s.at("pick/whole_table") * 1e3,
                     reporter.counters["pick/whole_table.combinations"]);
+    if (has("board/size_64"))
+        std::printf("  64-channel board, one shot   %8.2f ms (goal under 20 ms)\n", s.at("board/size_64") * 1e3);
+    if (has("board/read_and_size_64"))
+        std::printf("  the same, reading the file   %8.2f ms\n", s.at("board/read_and_size_64") * 1e3);
+    if (has("process/coilfit_board_64"))
+        std::printf("  coilfit board, one process   %8.2f ms (64 channels)\n", s.at("process/coilfit_board_64") * 1e3);
     if (has("process/coilfit_size") && has("process/bin_true")) {
         std::printf("  coilfit size, one process    %8.2f ms\n", s.at("process/coilfit_size") * 1e3);
         std::printf("  /bin/true, one process       %8.2f ms\n", s.at("process/bin_true") * 1e3);

@@ -22,7 +22,7 @@ constexpr std::string_view fields[] = {
     "base_resistor.tolerance", "base_resistor.power_rating", "base_resistor.value", "pulldown",
     "policy.forced_gain", "policy.overdrive", "policy.current_derating", "policy.voltage_derating",
     "policy.junction_margin", "policy.power_derating", "policy.vbe_low", "switching.frequency", "load.voltage",
-    "load.kind", "load.current"};
+    "load.kind", "load.current", "load.type", "load.inrush", "load.power_factor", "load.time_constant", "relay"};
 constexpr std::size_t field_count = sizeof(fields) / sizeof(fields[0]);
 
 const io::SpecDocument& example() {
