@@ -31,11 +31,11 @@ coilfit_help_case(size 0 ARGS size --help STDOUT_FIRST "Usage: coilfit size [SPE
 # Options grouped: the command's own first, then General, then the spec fields by section, each
 # option with its default.
 coilfit_help_case(size-groups 0 ARGS size --help
-  STDOUT_MATCH "\nSize\n  --strict .*\n\nGeneral\n  --parts PATH .*\n\nSpec: supply and ambient\n.*\n\nSpec: coil\n.*\n\nSpec: microcontroller pin\n.*\n\nSpec: driver\n.*\n\nSpec: clamp\n.*\n\nSpec: method policy\n.*\n\nSpec: switching and load\n")
+  STDOUT_MATCH "\nSize\n  --strict .*\n\nGeneral\n  --parts PATH .*\n\nSpec: supply and ambient\n.*\n\nSpec: coil\n.*\n\nSpec: microcontroller pin\n.*\n\nSpec: driver\n.*\n\nSpec: clamp\n.*\n\nSpec: method policy\n.*\n\nSpec: switching, relay and load\n")
 coilfit_help_case(size-defaults 0 ARGS size --help
   STDOUT_MATCH "--format text\\|json +output format \\(default text\\).*--supply-tolerance PERCENT +supply tolerance, e.g. 10% \\(default 10%\\)")
 coilfit_help_case(pick-own-first 0 ARGS pick --help STDOUT_FIRST "Usage: coilfit pick [SPEC] [options]"
-  STDOUT_MATCH "\n\nArguments\n  SPEC .*\n\nPick\n  --top N +list only the best N combinations \\(default 0: all\\)\n\nGeneral\n.*\n\nSpec: supply")
+  STDOUT_MATCH "\n\nArguments\n  SPEC .*\n\nPick\n  --top N +list only the best N rows, a whole number \\(default 0: all\\)\n  --all-clamps .*\n\nGeneral\n.*\n\nSpec: supply")
 coilfit_help_case(yield-own-first 0 ARGS yield --help STDOUT_FIRST "Usage: coilfit yield [SPEC] [options]"
   STDOUT_MATCH "\n\nYield\n  --samples N +number of samples \\(default 100000\\)\n.*--jobs J.*\n\nGeneral\n.*\n\nSpec: supply")
 coilfit_help_case(parts 0 ARGS parts --help STDOUT_FIRST "Usage: coilfit parts [KIND] [ID] [options]"
@@ -61,7 +61,7 @@ coilfit_usage_error(short-command
   "coilfit: error: unknown command \"yie\"; did you mean yield? (see coilfit --help)"
   yie)
 coilfit_usage_error(unknown-command
-  "coilfit: error: unknown command \"frobnicate\"; expected size, pick, yield or parts (see coilfit --help)"
+  "coilfit: error: unknown command \"frobnicate\"; expected size, pick, yield, board or parts (see coilfit --help)"
   frobnicate)
 coilfit_usage_error(mistyped-flag
   "coilfit: error: unknown option --suply; did you mean --supply? (see coilfit size --help)"
@@ -79,8 +79,8 @@ coilfit_usage_error(extra-argument
   "coilfit: error: unexpected argument \"second.json\" (see coilfit size --help)"
   size ${help_ex} second.json)
 coilfit_usage_error(option-before-command
-  "coilfit: error: unknown option --format; a command comes first: size, pick, yield or parts (see coilfit --help)"
+  "coilfit: error: unknown option --format; a command comes first: size, pick, yield, board or parts (see coilfit --help)"
   --format json)
 coilfit_usage_error(no-command
-  "coilfit: error: no command given; expected size, pick, yield or parts (see coilfit --help)"
+  "coilfit: error: no command given; expected size, pick, yield, board or parts (see coilfit --help)"
   "")

@@ -34,7 +34,11 @@ first_err() { head -n 1 err.txt; }
 expect_err() { [ "$(first_err)" = "$1" ] || fail "stderr is '$(first_err)', expected '$1'"; }
 # A usage error from the argument library: the same words, with or without the program's prefix.
 expect_usage_err() {
-    [ "$(first_err)" = "$1" ] || [ "$(first_err)" = "coilfit: error: $1" ] || fail "stderr is '$(first_err)', expected '$1'"
+    # One line, "coilfit: error: " + the message + the help hint " (see coilfit CMD --help)".
+    case "$(first_err)" in
+        "coilfit: error: $1 (see coilfit "*" --help)") ;;
+        *) fail "stderr is '$(first_err)', expected 'coilfit: error: $1 (see coilfit ... --help)'" ;;
+    esac
 }
 sum() { cksum <"$1"; }
 mode() { stat -c %a "$1"; }

@@ -53,11 +53,13 @@ _coilfit() {
         --tvs) kind=tvs ;;
         --coil-preset) kind=coil ;;
         --pin-preset) kind=pin ;;
+        --relay) kind=relay ;;
         --format) mapfile -t COMPREPLY < <(compgen -W 'text json' -- "$cur"); return 0 ;;
         --clamp) mapfile -t COMPREPLY < <(compgen -W 'diode diode_zener diode_resistor diode_tvs none' -- "$cur"); return 0 ;;
         --series | --gate-series) mapfile -t COMPREPLY < <(compgen -W 'E3 E6 E12 E24 E48 E96 E192' -- "$cur"); return 0 ;;
         --choose) mapfile -t COMPREPLY < <(compgen -W 'largest centred' -- "$cur"); return 0 ;;
-        --load-kind) mapfile -t COMPREPLY < <(compgen -W 'ac dc' -- "$cur"); return 0 ;;
+        --load-kind) mapfile -t COMPREPLY < <(compgen -W 'resistive inductive motor lamp capacitive solenoid transformer' -- "$cur"); return 0 ;;
+        --load-type) mapfile -t COMPREPLY < <(compgen -W 'ac dc' -- "$cur"); return 0 ;;
         --distribution) mapfile -t COMPREPLY < <(compgen -W 'uniform normal' -- "$cur"); return 0 ;;
         --conditions) mapfile -t COMPREPLY < <(compgen -W 'worst sampled' -- "$cur"); return 0 ;;
         --parts) mapfile -t COMPREPLY < <(compgen -f -- "$cur"); return 0 ;;
