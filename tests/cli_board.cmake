@@ -43,6 +43,11 @@ add_test(NAME cli.board.output
   COMMAND ${CMAKE_COMMAND} "-DCMD=${COILFIT_EXE}|board|${board_ex_max_on}|--format|json|--output|${CMAKE_CURRENT_BINARY_DIR}/board-output.json"
           -DRC=0 "-DSTDOUT_NOT_MATCH=." -P ${run_case})
 set_tests_properties(cli.board.output PROPERTIES ENVIRONMENT "COILFIT_PARTS=${COILFIT_PARTS_DIR}")
+# --output naming the board file itself (a scratch copy): refused before anything is written.
+set(board_scratch ${CMAKE_CURRENT_BINARY_DIR}/board-scratch.json)
+configure_file(${board_ex_max_on} ${board_scratch} COPYONLY)
+coilfit_board_case(output-is-input 2 ARGS ${board_scratch} --output ${board_scratch}
+  DEFS "-DSTDERR_MATCH=^coilfit: error: --output: [^\n]*board-scratch.json is an input of this run")
 
 # Bad board files (tests/data/bad_board, made from one small board of our own): exit 2 and the
 # first line of stderr exactly. The cases run in that folder so that messages name them short.

@@ -35,18 +35,23 @@ int run_board(const BoardOptions& options) {
     const io::PartsTable table = load_table(options.common);
     const io::BoardDocument doc = io::load_board_document(options.board_path);
     const Board board = io::read_board(doc, table);
+    // The board file and the table are inputs: no output may replace them (io/output.hpp).
+    io::RunInputs inputs;
+    if (options.board_path != "-") inputs.push_back(options.board_path);
+    inputs.insert(inputs.end(), table.files.begin(), table.files.end());
+    check_outputs(options.common.output, {}, inputs);
     io::TextStyle style;
     style.color = use_color(options.common.output);
     style.width = text_width();
     const bool json = options.common.format == "json";
     if (!options.channel.empty()) {
         const SizingReport report = size(find_channel(board, options.channel, doc.origin.file).spec, table.catalogue);
-        emit(json ? io::report_to_json(report).dump(2) + "\n" : io::render_text(report, style), options.common.output);
+        emit(json ? io::report_to_json(report).dump(2) + "\n" : io::render_text(report, style), options.common.output, inputs);
         return exit_code(report.verdict, report.has_warnings, options.strict);
     }
     const BoardReport report = size_board(board, table.catalogue);
     emit(json ? io::board_report_to_json(report).dump(2) + "\n" : io::render_board_text(report, style, options.brief),
-         options.common.output);
+         options.common.output, inputs);
     return exit_code(report.verdict, report.has_warnings, options.strict);
 }
 
