@@ -1,8 +1,8 @@
 #include "cli/help.hpp"
 
 #include <algorithm>
-#include <numeric>
 
+#include "coilfit/id_match.hpp"
 #include "io/format.hpp"
 
 namespace coilfit::cli {
@@ -16,22 +16,6 @@ std::string item_label(const HelpItem& item) { return item.value.empty() ? item.
 
 std::string item_text(const HelpItem& item) {
     return item.def.empty() ? item.text : item.text + " (default " + item.def + ")";
-}
-
-// Levenshtein distance (small words only).
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-    std::vector<std::size_t> row(b.size() + 1);
-    std::iota(row.begin(), row.end(), std::size_t{0});
-    for (std::size_t i = 1; i <= a.size(); ++i) {
-        std::size_t diagonal = row[0];
-        row[0] = i;
-        for (std::size_t j = 1; j <= b.size(); ++j) {
-            const std::size_t up = row[j];
-            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
-            diagonal = up;
-        }
-    }
-    return row[b.size()];
 }
 
 }  // namespace

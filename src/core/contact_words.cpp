@@ -118,9 +118,9 @@ std::string contact_skip_reason(CheckId id, const Spec& spec) {
     const Contacts& k = *spec.relay->contacts;
     const bool ac = load.kind == LoadKind::ac;
     const bool rated = ac ? k.ac.has_value() : k.dc.has_value();
-    const std::string no_rating = "not checked: " + relay_id(spec) + " gives no " + (ac ? "AC" : "DC") +
+    std::string no_rating = "not checked: " + relay_id(spec) + " gives no " + (ac ? "AC" : "DC") +
                                   " rating (contacts." + (ac ? "ac" : "dc") + ")";
-    const std::string no_current = "not checked: give load.current (the steady current the contacts carry)";
+    std::string no_current = "not checked: give load.current (the steady current the contacts carry)";
     switch (id) {
         case CheckId::contact_voltage:
             return no_rating;
