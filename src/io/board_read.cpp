@@ -12,18 +12,26 @@
 namespace coilfit::io {
 namespace board_read {
 
+// "a.b" from "a" and "b".
+std::string joined(const std::string& path, const std::string& key) {
+    std::string out = path;
+    out += '.';
+    out += key;
+    return out;
+}
+
 void overlay(Json& into, const Json& from, const std::string& path, const std::string& source,
              std::map<std::string, std::string>& written_at) {
     if (into.is_object() && from.is_object() && !path.empty()) {
         written_at[path] = source;
         for (const auto& [key, value] : from.items()) {
-            overlay(into[key], value, path + "." + key, source + "." + key, written_at);
+            overlay(into[key], value, joined(path, key), joined(source, key), written_at);
         }
         return;
     }
     if (path.empty()) {  // the document itself: its keys, each from `source`
         for (const auto& [key, value] : from.items()) {
-            overlay(into[key], value, key, source.empty() ? key : source + "." + key, written_at);
+            overlay(into[key], value, key, source.empty() ? key : joined(source, key), written_at);
         }
         return;
     }

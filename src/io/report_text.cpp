@@ -66,7 +66,6 @@ std::string title_line(const SizingReport& report, const TextStyle& style) {
 
 namespace {
 
-using text::labelled;
 using text::qf;
 
 std::string package_words(const std::string& package) { return package.empty() ? std::string("package not given") : package; }
