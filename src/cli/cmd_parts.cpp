@@ -201,6 +201,7 @@ int run_parts(const PartsOptions& options) {
     }
     if (!id.empty()) {
         std::vector<std::string> ids;
+        ids.reserve(shown.size());
         for (const Entry* e : shown) ids.push_back(e->id);
         const IdMatch m = match_id(id, ids);
         if (!m.id) {

@@ -174,7 +174,7 @@ PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickS
     } else {
         out.put(io::wrap(fmt::format("coilfit pick - {}: every pair, in table order", title(spec)), style.width, 2) + "\n\n");
     }
-    const PickResult result = pick_each(spec, table.catalogue, settings, [&](const Candidate& c) {
+    PickResult result = pick_each(spec, table.catalogue, settings, [&](const Candidate& c) {
         if (json) {
             std::string item = candidate_json(c, true).dump(2);
             for (std::size_t at = item.find('\n'); at != std::string::npos; at = item.find('\n', at + 1)) item.insert(at + 1, "    ");

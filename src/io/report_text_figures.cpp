@@ -54,7 +54,7 @@ std::string clamp_options_section(const SizingReport& report, const TextStyle& s
     std::string out = wrap("Clamp options (faster release costs collector voltage)", style.width, 2) + "\n";
     std::size_t ow = 6;
     for (const auto& o : report.clamp_options) ow = std::max(ow, display_width(o.label));
-    const bool narrow = 4 + ow + std::size_t{3 * 11} + 11 > style.width;
+    const bool narrow = 4 + ow + std::size_t{33} + 11 > style.width;  // three 11-column cells and the last
     if (!narrow) {
         out += "    " + pad_right("clamp", ow) + "  " + pad_left("peak Vce", 9) + "  " + pad_left("release", 9) + "  " + pad_left("energy", 9) +
                "  in rating\n";
