@@ -12,9 +12,9 @@
 
 #include "coilfit/clamp.hpp"
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
-#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -54,7 +54,9 @@ Integrated integrate_decay(double l_h, double r_ohm, double vc_v, double i0_a, d
         double i, q, w;
     };
     auto deriv = [&](const State& s) { return State{-(r_ohm * s.i + vc_v) / l_h, s.i, r_ohm * s.i * s.i}; };
-    auto axpy = [](const State& s, double a, const State& d) { return State{s.i + a * d.i, s.q + a * d.q, s.w + a * d.w}; };
+    auto axpy = [](const State& s, double a, const State& d) {
+        return State{s.i + a * d.i, s.q + a * d.q, s.w + a * d.w};
+    };
     Integrated out;
     State s{i0_a, 0.0, 0.0};
     double t = 0;
@@ -64,7 +66,8 @@ Integrated integrate_decay(double l_h, double r_ohm, double vc_v, double i0_a, d
         const State k2 = deriv(axpy(s, h / 2, k1));
         const State k3 = deriv(axpy(s, h / 2, k2));
         const State k4 = deriv(axpy(s, h, k3));
-        const State next{s.i + h / 6 * (k1.i + 2 * k2.i + 2 * k3.i + k4.i), s.q + h / 6 * (k1.q + 2 * k2.q + 2 * k3.q + k4.q),
+        const State next{s.i + h / 6 * (k1.i + 2 * k2.i + 2 * k3.i + k4.i),
+                         s.q + h / 6 * (k1.q + 2 * k2.q + 2 * k3.q + k4.q),
                          s.w + h / 6 * (k1.w + 2 * k2.w + 2 * k3.w + k4.w)};
         if (!released && next.i <= i_rel_a) {
             out.release_time_s = t + h * (s.i - i_rel_a) / (s.i - next.i);
@@ -126,7 +129,8 @@ TEST_SUITE("clamp") {
             const Decay d = rl_decay(c.l_h, c.r_ohm, c.vc_v, c.i0_a, c.i_rel_a);
             const Integrated n = integrate_decay(c.l_h, c.r_ohm, c.vc_v, c.i0_a, c.i_rel_a, 20000);
             CHECK(c.r_ohm * d.i2_integral == Approx(n.coil_heat_j).epsilon(0.001));
-            CHECK(clamp_energy(d, c.vc_v, 0.0) + c.r_ohm * d.i2_integral == Approx(stored_energy(c.l_h, c.i0_a)).epsilon(1e-9));
+            CHECK(clamp_energy(d, c.vc_v, 0.0) + c.r_ohm * d.i2_integral ==
+                  Approx(stored_energy(c.l_h, c.i0_a)).epsilon(1e-9));
         }
         // diode + resistor: the loop resistance holds coil and clamp resistor; the clamp takes Vf Q + Rs integral(i^2).
         const double r_coil = 873.3, rs = 680.0, vf = 0.6, i0 = 0.0302;
@@ -200,7 +204,8 @@ TEST_SUITE("clamp") {
         const Zener& zr = *s.clamp.zener;
         const double drift_hot = zr.vz_tempco_v_per_k.value_or(0) * (50.0 - 25.0);
         const double drift_cold = zr.vz_tempco_v_per_k.value_or(0) * (0.0 - 25.0);
-        const double vz_peak = 12.0 * 1.05 + zr.zzt_ohm.value_or(0) * (i0 - zr.izt_a.value_or(i0)) + std::max(drift_hot, 0.0);
+        const double vz_peak =
+            12.0 * 1.05 + zr.zzt_ohm.value_or(0) * (i0 - zr.izt_a.value_or(i0)) + std::max(drift_hot, 0.0);
         CHECK(test::flat(z.worst).peak_collector_voltage_v == Approx(13.2 + vz_peak + vf_max));
         // Closed form (src/method.md) with Vc = Vz_lo + vf_low, worked here independently.
         const double vc = 12.0 * 0.95 + std::min(drift_cold, 0.0) + 0.6;
@@ -215,7 +220,8 @@ TEST_SUITE("clamp") {
 
     TEST_CASE("the release time check compares the longest release with coil.max_release_time") {
         const std::string clamp = R"({ "type": "diode", "diode": "1N4148" })";
-        const SizingReport slow = size(spec_from(valve(clamp, R"(, "inductance": "0.9H", "max_release_time": "4ms")")), table().catalogue);
+        const SizingReport slow =
+            size(spec_from(valve(clamp, R"(, "inductance": "0.9H", "max_release_time": "4ms")")), table().catalogue);
         const Check* c = slow.find_check("release.time");
         REQUIRE(c != nullptr);
         CHECK(c->verdict == Verdict::fail);
@@ -228,15 +234,17 @@ TEST_SUITE("clamp") {
     }
 
     TEST_CASE("no clamp always fails: breakdown limits the voltage and the stored energy goes into the transistor") {
-        const Spec s = spec_from(valve(R"({ "type": "none" })", R"(, "inductance": "0.9H", "max_release_time": "10ms")"));
+        const Spec s =
+            spec_from(valve(R"({ "type": "none" })", R"(, "inductance": "0.9H", "max_release_time": "10ms")"));
         const SizingReport r = size(s, table().catalogue);
         CHECK(r.verdict == Verdict::fail);
         const Check* v = r.find_check("transistor.voltage");
         REQUIRE(v != nullptr);
         CHECK(v->verdict == Verdict::fail);
-        CHECK(v->message ==
-              "no clamp: at turn-off the collector voltage is limited only by breakdown, and the stored energy 1/2 L I^2 "
-              "(713 µJ) goes into the transistor; fit a diode across the coil");
+        CHECK(
+            v->message ==
+            "no clamp: at turn-off the collector voltage is limited only by breakdown, and the stored energy 1/2 L I^2 "
+            "(713 µJ) goes into the transistor; fit a diode across the coil");
         // 1/2 L I0^2 with I0 = 13.2 V / 331.704 ohm.
         REQUIRE(r.quantity("stored_energy_j"));
         CHECK(*r.quantity("stored_energy_j") == Approx(0.5 * 0.9 * std::pow(13.2 / 331.704, 2)));
@@ -249,8 +257,10 @@ TEST_SUITE("clamp") {
     }
 
     TEST_CASE("without the inductance timing is omitted and a note says how to get it") {
-        const SizingReport r = size(spec_from(valve(R"({ "type": "diode", "diode": "1N4148" })", "")), table().catalogue);
-        for (const char* key : {"release_time_s", "current_zero_time_s", "stored_energy_j", "clamp_energy_j", "clamp_power_w"}) {
+        const SizingReport r =
+            size(spec_from(valve(R"({ "type": "diode", "diode": "1N4148" })", "")), table().catalogue);
+        for (const char* key :
+             {"release_time_s", "current_zero_time_s", "stored_energy_j", "clamp_energy_j", "clamp_power_w"}) {
             INFO(key);
             CHECK_FALSE(r.quantity(key));
         }
@@ -258,8 +268,9 @@ TEST_SUITE("clamp") {
         CHECK(r.clamp_options.empty());
         bool note = false;
         for (const std::string& n : r.notes) {
-            note = note || (n.find("no coil inductance") != std::string::npos && n.find("LCR meter") != std::string::npos &&
-                            n.find("energised position") != std::string::npos && n.find("ask the maker") != std::string::npos);
+            note = note ||
+                   (n.find("no coil inductance") != std::string::npos && n.find("LCR meter") != std::string::npos &&
+                    n.find("energised position") != std::string::npos && n.find("ask the maker") != std::string::npos);
         }
         CHECK(note);
         CHECK(r.find_check("release.time")->verdict == Verdict::skip);

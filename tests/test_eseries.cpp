@@ -20,13 +20,12 @@ const std::vector<int> iec_e24{10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30,
                                33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91};
 
 // IEC 60063:2015, table of the E96 series (three significant figures).
-const std::vector<int> iec_e96{
-    100, 102, 105, 107, 110, 113, 115, 118, 121, 124, 127, 130, 133, 137, 140, 143,
-    147, 150, 154, 158, 162, 165, 169, 174, 178, 182, 187, 191, 196, 200, 205, 210,
-    215, 221, 226, 232, 237, 243, 249, 255, 261, 267, 274, 280, 287, 294, 301, 309,
-    316, 324, 332, 340, 348, 357, 365, 374, 383, 392, 402, 412, 422, 432, 442, 453,
-    464, 475, 487, 499, 511, 523, 536, 549, 562, 576, 590, 604, 619, 634, 649, 665,
-    681, 698, 715, 732, 750, 768, 787, 806, 825, 845, 866, 887, 909, 931, 953, 976};
+const std::vector<int> iec_e96{100, 102, 105, 107, 110, 113, 115, 118, 121, 124, 127, 130, 133, 137, 140, 143,
+                               147, 150, 154, 158, 162, 165, 169, 174, 178, 182, 187, 191, 196, 200, 205, 210,
+                               215, 221, 226, 232, 237, 243, 249, 255, 261, 267, 274, 280, 287, 294, 301, 309,
+                               316, 324, 332, 340, 348, 357, 365, 374, 383, 392, 402, 412, 422, 432, 442, 453,
+                               464, 475, 487, 499, 511, 523, 536, 549, 562, 576, 590, 604, 619, 634, 649, 665,
+                               681, 698, 715, 732, 750, 768, 787, 806, 825, 845, 866, 887, 909, 931, 953, 976};
 
 std::vector<int> mantissas(ESeries s) {
     const auto m = coilfit::eseries_mantissas(s);
@@ -47,13 +46,13 @@ TEST_SUITE("eseries") {
         for (int v : iec_e24) expected.push_back(v * 10);
         CHECK(mantissas(ESeries::e24) == expected);
         // The rounded formula would give 2.6, 2.9, 3.2, 3.5, 3.8, 4.2, 4.6 and 8.3 here.
-        for (const double v : {2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 8.2}) CHECK(coilfit::eseries_contains(v, ESeries::e24));
-        for (const double v : {2.6, 2.9, 3.2, 3.5, 3.8, 4.2, 4.6, 8.3}) CHECK_FALSE(coilfit::eseries_contains(v, ESeries::e24));
+        for (const double v : {2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 8.2})
+            CHECK(coilfit::eseries_contains(v, ESeries::e24));
+        for (const double v : {2.6, 2.9, 3.2, 3.5, 3.8, 4.2, 4.6, 8.3})
+            CHECK_FALSE(coilfit::eseries_contains(v, ESeries::e24));
     }
 
-    TEST_CASE("E96 matches the IEC 60063 table") {
-        CHECK(mantissas(ESeries::e96) == iec_e96);
-    }
+    TEST_CASE("E96 matches the IEC 60063 table") { CHECK(mantissas(ESeries::e96) == iec_e96); }
 
     TEST_CASE("E48 is every second E96 value and E192 has 9.20, not the formula's 9.19") {
         // IEC 60063: E48 values are the odd-numbered E96 values.
@@ -106,7 +105,8 @@ TEST_SUITE("eseries") {
     }
 
     TEST_CASE("every series lists its values in every decade") {
-        for (const ESeries s : {ESeries::e3, ESeries::e6, ESeries::e12, ESeries::e24, ESeries::e48, ESeries::e96, ESeries::e192}) {
+        for (const ESeries s :
+             {ESeries::e3, ESeries::e6, ESeries::e12, ESeries::e24, ESeries::e48, ESeries::e96, ESeries::e192}) {
             const auto m = coilfit::eseries_mantissas(s);
             for (int decade = 0; decade <= 7; ++decade) {
                 for (const int v : m) {

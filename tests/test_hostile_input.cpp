@@ -59,18 +59,20 @@ std::string run(const Row& row) {
     const io::PartsTable& table = test::shipped_table();
     try {
         switch (row.source) {
-        case Source::spec: (void)io::read_spec(io::parse_spec_text(row.text, "spec.json"), table); break;
-        case Source::parts: {
-            io::PartsTable t;
-            io::parse_parts_text(row.text, "parts/test.json", t);
-            break;
-        }
-        case Source::flag: {
-            io::SpecDocument d = io::parse_spec_text(spec_text("K2"), "spec.json");
-            io::set_field(d, row.field, row.text, row.flag);
-            (void)io::read_spec(d, table);
-            break;
-        }
+            case Source::spec:
+                (void)io::read_spec(io::parse_spec_text(row.text, "spec.json"), table);
+                break;
+            case Source::parts: {
+                io::PartsTable t;
+                io::parse_parts_text(row.text, "parts/test.json", t);
+                break;
+            }
+            case Source::flag: {
+                io::SpecDocument d = io::parse_spec_text(spec_text("K2"), "spec.json");
+                io::set_field(d, row.field, row.text, row.flag);
+                (void)io::read_spec(d, table);
+                break;
+            }
         }
     } catch (const InputError& e) {
         return e.what();
@@ -88,30 +90,41 @@ std::vector<Row> rows() {
     return {
         // Names: bidi controls rejected, shown escaped; invisible characters allowed but escaped
         // wherever they are echoed; lengths in characters.
-        {S, spec_text("valve " + rlo + "2K"), R"(spec.json: name: expected a text without bidirectional controls, got "valve \u202e2K")"},
-        {S, spec_text("valve " + lri + "K2"), R"(spec.json: name: expected a text without bidirectional controls, got "valve \u2066K2")"},
+        {S, spec_text("valve " + rlo + "2K"),
+         R"(spec.json: name: expected a text without bidirectional controls, got "valve \u202e2K")"},
+        {S, spec_text("valve " + lri + "K2"),
+         R"(spec.json: name: expected a text without bidirectional controls, got "valve \u2066K2")"},
         {S, spec_text("valve" + nbsp + "K2"), ""},
         {S, spec_text(e200), ""},
         {S, spec_text(e200 + "x"), "spec.json: name: expected a text of at most 200 characters, got 201"},
         {S, spec_text("K2 " + nel), R"(spec.json: name: expected a text without control characters, got "K2 \u0085")"},
         {F, "K2" + rlo, R"(--name: expected a text without bidirectional controls, got "K2\u202e")", "name", "--name"},
         // Values: a no-break or zero-width space, or a byte-order mark, is shown, not hidden.
-        {F, "12" + nbsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u00a0V")", "supply.voltage", "--supply"},
-        {F, "12" + zwsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u200bV")", "supply.voltage", "--supply"},
-        {F, bom + "12V", R"(--supply: expected a voltage such as "12V", got "\ufeff12V")", "supply.voltage", "--supply"},
-        {F, "2N4401" + zwsp, R"(--transistor: no transistor "2N4401\u200b" in the parts table ()" + files +
-                                 "); nearest: 2N4401; `coilfit parts transistors` lists them",
+        {F, "12" + nbsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u00a0V")", "supply.voltage",
+         "--supply"},
+        {F, "12" + zwsp + "V", R"(--supply: expected a voltage such as "12V", got "12\u200bV")", "supply.voltage",
+         "--supply"},
+        {F, bom + "12V", R"(--supply: expected a voltage such as "12V", got "\ufeff12V")", "supply.voltage",
+         "--supply"},
+        {F, "2N4401" + zwsp,
+         R"(--transistor: no transistor "2N4401\u200b" in the parts table ()" + files +
+             "); nearest: 2N4401; `coilfit parts transistors` lists them",
          "transistor", "--transistor"},
-        {F, "1N4148" + nbsp, R"(--diode: no diode "1N4148\u00a0" in the parts table ()" + files +
-                               "); nearest: 1N4148, 1N4448; `coilfit parts diodes` lists them", "clamp.diode",
-         "--diode"},
+        {F, "1N4148" + nbsp,
+         R"(--diode: no diode "1N4148\u00a0" in the parts table ()" + files +
+             "); nearest: 1N4148, 1N4448; `coilfit parts diodes` lists them",
+         "clamp.diode", "--diode"},
         {S, "{ \"na" + zwsp + "me\": \"K2\"," + spec_text("K2").substr(1),
-         "spec.json: na\\u200bme: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, load, name, pin, "
+         "spec.json: na\\u200bme: unknown key (expected one of: ambient, base_resistor, clamp, coil, gate_resistor, "
+         "load, name, pin, "
          "policy, pulldown, relay, schema, supply, switching, transistor)"},
         // Ids in the table: no bidi controls, no invisible characters.
-        {P, npn_with_id("QT" + rlo + "1"), R"(parts/test.json: [0].id: expected a text without bidirectional controls, got "QT\u202e1")"},
-        {P, npn_with_id("2N4401" + zwsp), R"(parts/test.json: [0].id: expected an id without invisible characters, got "2N4401\u200b")"},
-        {P, npn_with_id(nbsp + "QT1"), R"(parts/test.json: [0].id: expected an id without invisible characters, got "\u00a0QT1")"},
+        {P, npn_with_id("QT" + rlo + "1"),
+         R"(parts/test.json: [0].id: expected a text without bidirectional controls, got "QT\u202e1")"},
+        {P, npn_with_id("2N4401" + zwsp),
+         R"(parts/test.json: [0].id: expected an id without invisible characters, got "2N4401\u200b")"},
+        {P, npn_with_id(nbsp + "QT1"),
+         R"(parts/test.json: [0].id: expected an id without invisible characters, got "\u00a0QT1")"},
     };
 }
 
@@ -134,7 +147,10 @@ TEST_SUITE("hostile input") {
         CHECK(escape_text(nbsp + zwsp + rlo + bom) == "\\u00a0\\u200b\\u202e\\ufeff");
         CHECK(escape_text("\xf3\xa0\x80\x81") == "\\U000e0001");  // U+E0001 LANGUAGE TAG
         CHECK(escape_text("\xff\xfe") == "\\xff\\xfe");
-        CHECK(escape_text("12 V, 4k7, 470 \xce\xa9, 25 \xc2\xb0" "C") == "12 V, 4k7, 470 \xce\xa9, 25 \xc2\xb0" "C");  // Ω and ° stay
+        CHECK(escape_text("12 V, 4k7, 470 \xce\xa9, 25 \xc2\xb0"
+                          "C") ==
+              "12 V, 4k7, 470 \xce\xa9, 25 \xc2\xb0"
+              "C");  // Ω and ° stay
         CHECK(escape_text("abcdef", 3) == "abc...");
         CHECK(escape_text("\xc3\xa9\xc3\xa9\xc3\xa9", 2) == "\xc3\xa9\xc3\xa9...");
         CHECK(count_characters("\xc3\xa9t\xc3\xa9") == 3);

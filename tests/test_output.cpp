@@ -48,7 +48,7 @@ void put(const fs::path& p, const std::string& text, unsigned mode) {
 Snapshot snapshot(const fs::path& root) {
     Snapshot s;
     for (auto it = fs::recursive_directory_iterator(root); it != fs::recursive_directory_iterator(); ++it) {
-        struct stat st{};
+        struct stat st {};
         REQUIRE(::lstat(it->path().c_str(), &st) == 0);
         Entry e;
         e.mode = st.st_mode & 07777;
@@ -78,13 +78,25 @@ struct Candidate {
 // The world: two inputs, plain files of several modes, links of every sort, a FIFO, a folder.
 const std::vector<Candidate>& candidates() {
     static const std::vector<Candidate> c = {
-        {"a.txt", "a.txt", false},         {"./a.txt", "a.txt", false},       {"b.txt", "b.txt", false},
-        {"sub/c.txt", "sub/c.txt", false}, {"sub/../b.txt", "b.txt", false},  {"la", "a.txt", false},
-        {"lsub", "sub/c.txt", false},      {"sub/lup", "b.txt", false},       {"ldangling", "sub/new.txt", false},
-        {"fresh.txt", "fresh.txt", false}, {"sub/fresh2.txt", "sub/fresh2.txt", false},
-        {"pipe", "", false},               {"spec.json", "", true},           {"./spec.json", "", true},
-        {"parts.json", "", true},          {"lspec", "", true},               {"sub/../parts.json", "", true},
-        {"sub", "", true},                 {"lsubdir", "", true},
+        {"a.txt", "a.txt", false},
+        {"./a.txt", "a.txt", false},
+        {"b.txt", "b.txt", false},
+        {"sub/c.txt", "sub/c.txt", false},
+        {"sub/../b.txt", "b.txt", false},
+        {"la", "a.txt", false},
+        {"lsub", "sub/c.txt", false},
+        {"sub/lup", "b.txt", false},
+        {"ldangling", "sub/new.txt", false},
+        {"fresh.txt", "fresh.txt", false},
+        {"sub/fresh2.txt", "sub/fresh2.txt", false},
+        {"pipe", "", false},
+        {"spec.json", "", true},
+        {"./spec.json", "", true},
+        {"parts.json", "", true},
+        {"lspec", "", true},
+        {"sub/../parts.json", "", true},
+        {"sub", "", true},
+        {"lsubdir", "", true},
     };
     return c;
 }
@@ -166,8 +178,10 @@ void try_outputs(const fs::path& root, const std::vector<const Candidate*>& outs
         io::check_outputs(targets, inputs);
         for (std::size_t i = 0; i < outs.size(); ++i) {
             io::write_output(targets[i], contents[i], inputs);
-            if (outs[i]->target.empty()) to_pipe += contents[i];
-            else written[outs[i]->target] = contents[i];
+            if (outs[i]->target.empty())
+                to_pipe += contents[i];
+            else
+                written[outs[i]->target] = contents[i];
         }
         CHECK_FALSE(refused);
         CHECK_FALSE(clash);

@@ -153,38 +153,54 @@ TEST_SUITE("parts") {
         for (double ic = 1e-3; ic < 2.0; ic *= 1.37) {
             CAPTURE(ic);
             const auto& plain = t.catalogue.bipolars[0];
-            CHECK(coilfit::hfe_min_at(prepared, ic, std::log(ic)).value == Approx(coilfit::hfe_min_at(plain, ic).value).epsilon(1e-12));
-            CHECK(coilfit::vce_sat_at(prepared, ic, std::log(ic)).value == Approx(coilfit::vce_sat_at(plain, ic).value).epsilon(1e-12));
-            CHECK(coilfit::hfe_typ_at(prepared, ic).value == Approx(coilfit::hfe_typ_at(plain, ic).value).epsilon(1e-12));
+            CHECK(coilfit::hfe_min_at(prepared, ic, std::log(ic)).value ==
+                  Approx(coilfit::hfe_min_at(plain, ic).value).epsilon(1e-12));
+            CHECK(coilfit::vce_sat_at(prepared, ic, std::log(ic)).value ==
+                  Approx(coilfit::vce_sat_at(plain, ic).value).epsilon(1e-12));
+            CHECK(coilfit::hfe_typ_at(prepared, ic).value ==
+                  Approx(coilfit::hfe_typ_at(plain, ic).value).epsilon(1e-12));
         }
     }
 
     TEST_CASE("broken tables are rejected naming the file and the field") {
-        CHECK_THROWS_WITH_AS(parse("[{ \"id\": \"Q1\", "), "parts/test.json:1:16: not valid JSON: unexpected end of input; expected string literal", InputError);
-        CHECK_THROWS_WITH_AS(parse("{}"), "parts/test.json: expected a JSON list [ ... ] of part records, got an object", InputError);
+        CHECK_THROWS_WITH_AS(parse("[{ \"id\": \"Q1\", "),
+                             "parts/test.json:1:16: not valid JSON: unexpected end of input; expected string literal",
+                             InputError);
+        CHECK_THROWS_WITH_AS(
+            parse("{}"), "parts/test.json: expected a JSON list [ ... ] of part records, got an object", InputError);
         std::string missing = good_npn;
         missing.replace(missing.find("\"vceo\": \"40V\","), 14, "");
-        CHECK_THROWS_WITH_AS(parse(missing), "parts/test.json: [0].vceo: missing; expected a voltage such as \"12V\"", InputError);
+        CHECK_THROWS_WITH_AS(parse(missing), "parts/test.json: [0].vceo: missing; expected a voltage such as \"12V\"",
+                             InputError);
         std::string wrong_unit = good_npn;
         wrong_unit.replace(wrong_unit.find("\"40V\""), 5, "\"fourty\"");
-        CHECK_THROWS_WITH_AS(parse(wrong_unit), "parts/test.json: [0].vceo: expected a voltage such as \"12V\", got \"fourty\"", InputError);
+        CHECK_THROWS_WITH_AS(parse(wrong_unit),
+                             "parts/test.json: [0].vceo: expected a voltage such as \"12V\", got \"fourty\"",
+                             InputError);
         std::string amps = good_npn;
         amps.replace(amps.find("\"40V\""), 5, "\"40A\"");
-        CHECK_THROWS_WITH_AS(parse(amps), "parts/test.json: [0].vceo: expected a voltage such as \"12V\", got \"40A\" (a current)", InputError);
+        CHECK_THROWS_WITH_AS(parse(amps),
+                             "parts/test.json: [0].vceo: expected a voltage such as \"12V\", got \"40A\" (a current)",
+                             InputError);
         std::string dup = std::string(good_npn);
         dup = dup.substr(0, dup.size() - 1) + "," + std::string(good_npn).substr(1);
         CHECK_THROWS_WITH_AS(parse(dup), "parts/test.json: [1].id: duplicate id \"Q1\" (also at [0])", InputError);
         std::string unsorted = good_npn;
         unsorted.replace(unsorted.find("\"10mA\""), 6, "\"900mA\"");
-        CHECK_THROWS_WITH_AS(parse(unsorted), "parts/test.json: [0].hfe_min[1]: points must be in order of increasing current", InputError);
+        CHECK_THROWS_WITH_AS(parse(unsorted),
+                             "parts/test.json: [0].hfe_min[1]: points must be in order of increasing current",
+                             InputError);
         std::string nosource = good_npn;
         nosource.replace(nosource.find(", \"source\": \"test data\""), 23, "");
-        CHECK_THROWS_WITH_AS(parse(nosource), "parts/test.json: [0].source: missing; every record says where its values come from", InputError);
+        CHECK_THROWS_WITH_AS(parse(nosource),
+                             "parts/test.json: [0].source: missing; every record says where its values come from",
+                             InputError);
         std::string typo = good_npn;
         typo.replace(typo.find("\"pd\""), 4, "\"pdd\"");
         CHECK_THROWS_AS(parse(typo), InputError);
         CHECK_THROWS_WITH_AS(parse("[{ \"id\": \"X\", \"kind\": \"triode\" }]"),
-                             "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor",
+                             "parts/test.json: [0].kind: unknown kind \"triode\"; expected npn, darlington, nmos, "
+                             "array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor",
                              InputError);
     }
 
@@ -196,6 +212,7 @@ TEST_SUITE("parts") {
     }
 
     TEST_CASE("a missing path says so") {
-        CHECK_THROWS_WITH_AS(io::load_parts("/nonexistent/parts"), "/nonexistent/parts: no such parts file or folder", InputError);
+        CHECK_THROWS_WITH_AS(io::load_parts("/nonexistent/parts"), "/nonexistent/parts: no such parts file or folder",
+                             InputError);
     }
 }

@@ -36,14 +36,16 @@ TEST_SUITE("pick") {
             const PickResult result = pick(s.spec, s.table.catalogue, PickSettings{0, true});
             // Every transistor of every driver kind with every diode; an array channel with its own diode.
             const Catalogue& cat = s.table.catalogue;
-            CHECK(result.candidates.size() == (cat.bipolars.size() + cat.mosfets.size()) * cat.diodes.size() + cat.arrays.size());
+            CHECK(result.candidates.size() ==
+                  (cat.bipolars.size() + cat.mosfets.size()) * cat.diodes.size() + cat.arrays.size());
             for (const Candidate& c : result.candidates) {
                 CAPTURE(c.transistor);
                 CAPTURE(c.diode);
                 Spec alone = s.spec;
                 alone.transistor = *s.table.catalogue.find_transistor(c.transistor);
                 // pick gives a transistor of another kind its own kind's forced-gain default.
-                if (transistor_kind_name(alone.transistor) != transistor_kind_name(s.spec.transistor)) alone.policy.forced_gain.reset();
+                if (transistor_kind_name(alone.transistor) != transistor_kind_name(s.spec.transistor))
+                    alone.policy.forced_gain.reset();
                 if (const ArrayPart* a = alone.array()) {
                     alone.clamp = ClampSpec{};
                     alone.clamp.diode = a->diode;
@@ -110,9 +112,9 @@ TEST_SUITE("pick") {
                 CHECK(first->verdict == row.verdict);
                 const auto n = std::count_if(pairs.candidates.begin(), pairs.candidates.end(),
                                              [&](const Candidate& p) { return p.transistor == row.transistor; });
-                const auto passing = std::count_if(pairs.candidates.begin(), pairs.candidates.end(), [&](const Candidate& p) {
-                    return p.transistor == row.transistor && p.verdict == Verdict::pass;
-                });
+                const auto passing = std::count_if(
+                    pairs.candidates.begin(), pairs.candidates.end(),
+                    [&](const Candidate& p) { return p.transistor == row.transistor && p.verdict == Verdict::pass; });
                 CHECK(row.clamps_tried == static_cast<std::size_t>(n));
                 CHECK(row.clamps_passing == static_cast<std::size_t>(passing));
             }

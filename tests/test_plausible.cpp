@@ -46,14 +46,15 @@ TEST_SUITE("plausible") {
         // 12 A from 12 V across 1 Ω is a plausible solenoid; 48 V across 1 Ω is not a coil.
         CHECK(message_for("coil.resistance", 1, "--coil-resistance") == "accepted");
         CHECK(message_for("coil.resistance", 1, "--coil-resistance", "48V") ==
-              "--coil-resistance: 48 V across 1 Ω is 48 A, not a plausible coil current (100 µA to 20 A); did you mean 1k?");
+              "--coil-resistance: 48 V across 1 Ω is 48 A, not a plausible coil current (100 µA to 20 A); did you mean "
+              "1k?");
         CHECK(message_for("coil.resistance", 0.5, "--coil-resistance") ==
               "--coil-resistance: 500 mΩ is not a plausible coil resistance (1 Ω to 200 kΩ); did you mean 0.5k?");
         CHECK(message_for("pulldown", 47, "--pulldown") ==
               "--pulldown: 47 Ω is not a plausible pull-down (100 Ω to 100 MΩ); did you mean 47k?");
         // A flag changing the clamp's type asks for the new type's own field.
         const std::string m = message_for("clamp.type", "diode_resistor", "--clamp");
-        CHECK(m.find("greenhouse-valve.json: clamp.resistor: missing; a diode_resistor clamp needs a resistance such as \"470R\"") !=
-              std::string::npos);
+        CHECK(m.find("greenhouse-valve.json: clamp.resistor: missing; a diode_resistor clamp needs a resistance such "
+                     "as \"470R\"") != std::string::npos);
     }
 }

@@ -18,10 +18,10 @@
 
 #include "coilfit/pick.hpp"
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 #include "io/parts_io.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
-#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -91,7 +91,8 @@ io::Json random_spec(Random& rng) {
     const double operate = rng.uniform(0.11, 1.0);  // above the default must_release 10 %
     if (rng.chance(0.7)) coil["must_operate"] = percent(rng, operate);
     // must_release below must_operate (default 75 %)
-    if (rng.chance(0.7)) coil["must_release"] = percent(rng, rng.uniform(0.0, 0.999) * (coil.contains("must_operate") ? operate : 0.75));
+    if (rng.chance(0.7))
+        coil["must_release"] = percent(rng, rng.uniform(0.0, 0.999) * (coil.contains("must_operate") ? operate : 0.75));
     if (rng.chance(0.5)) coil["self_heating"] = value(rng, rng.uniform(0.0, 200.0), "K");
     if (rng.chance(0.7)) coil["inductance"] = value(rng, rng.log_uniform(1e-6, 1e4), "H");
     if (rng.chance(0.3)) coil["max_voltage"] = value(rng, std::min(1000.0, rated * rng.uniform(1.0, 3.0)), "V");
@@ -111,10 +112,19 @@ io::Json random_spec(Random& rng) {
     io::Json clamp;
     const std::string diode = cat.diodes[rng.below(cat.diodes.size())].id;
     switch (rng.below(4)) {
-    case 0: clamp = {{"type", "diode"}, {"diode", diode}}; break;
-    case 1: clamp = {{"type", "diode_zener"}, {"diode", diode}, {"zener", cat.zeners[rng.below(cat.zeners.size())].id}}; break;
-    case 2: clamp = {{"type", "diode_resistor"}, {"diode", diode}, {"resistor", value(rng, rng.log_uniform(1.0, 1e6), "R")}}; break;
-    default: clamp = {{"type", "none"}}; break;
+        case 0:
+            clamp = {{"type", "diode"}, {"diode", diode}};
+            break;
+        case 1:
+            clamp = {{"type", "diode_zener"}, {"diode", diode}, {"zener", cat.zeners[rng.below(cat.zeners.size())].id}};
+            break;
+        case 2:
+            clamp = {
+                {"type", "diode_resistor"}, {"diode", diode}, {"resistor", value(rng, rng.log_uniform(1.0, 1e6), "R")}};
+            break;
+        default:
+            clamp = {{"type", "none"}};
+            break;
     }
     j["clamp"] = clamp;
     if (rng.chance(0.7)) {
@@ -145,8 +155,10 @@ io::Json random_spec(Random& rng) {
         const double vs = supplies[rng.below(4)];
         const double r_coil = vs * vs / rng.uniform(0.2, 1.0);
         j["supply"] = {{"voltage", value(rng, vs, "V")}, {"tolerance", percent(rng, rng.uniform(0.0, 0.1))}};
-        j["ambient"] = {{"min", value(rng, rng.uniform(-40.0, 0.0), "C")}, {"max", value(rng, rng.uniform(25.0, 70.0), "C")}};
-        j["coil"] = {{"rated_voltage", value(rng, vs, "V")}, {"resistance", value(rng, r_coil, "R")},
+        j["ambient"] = {{"min", value(rng, rng.uniform(-40.0, 0.0), "C")},
+                        {"max", value(rng, rng.uniform(25.0, 70.0), "C")}};
+        j["coil"] = {{"rated_voltage", value(rng, vs, "V")},
+                     {"resistance", value(rng, r_coil, "R")},
                      {"inductance", value(rng, r_coil * rng.uniform(0.002, 0.02), "H")}};
         const double pin_vdd = rng.chance(0.5) ? 3.3 : 5.0;
         j["pin"] = {{"vdd", value(rng, pin_vdd, "V")}, {"max_current", value(rng, rng.uniform(0.004, 0.025), "A")}};
@@ -158,7 +170,8 @@ io::Json random_spec(Random& rng) {
         if (rng.chance(0.5)) j["load"]["current"] = value(rng, rng.uniform(0.0, 1e4), "A");
         if (rng.chance(0.5)) {
             // Edition 2: the kind of load, its inrush, power factor or L/R, and a relay record.
-            constexpr const char* kinds[] = {"resistive", "inductive", "motor", "lamp", "capacitive", "solenoid", "transformer"};
+            constexpr const char* kinds[] = {"resistive",  "inductive", "motor",      "lamp",
+                                             "capacitive", "solenoid",  "transformer"};
             const bool ac = j["load"]["kind"] == "ac";
             j["load"]["type"] = ac ? "ac" : "dc";
             j["load"]["kind"] = kinds[rng.below(7)];
@@ -185,7 +198,8 @@ bool shows_non_finite(const std::string& text) {
     for (const std::string word : {"nan", "inf", "infinity"}) {
         for (auto at = lower.find(word); at != std::string::npos; at = lower.find(word, at + 1)) {
             const auto end = at + word.size();
-            if ((at == 0 || !is_word_char(lower[at - 1])) && (end >= lower.size() || !is_word_char(lower[end]))) return true;
+            if ((at == 0 || !is_word_char(lower[at - 1])) && (end >= lower.size() || !is_word_char(lower[end])))
+                return true;
         }
     }
     return false;

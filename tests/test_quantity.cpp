@@ -1,8 +1,8 @@
 // Quantity parsing and formatting (include/coilfit/quantity.hpp).
 #include <doctest/doctest.h>
 
-#include <cmath>
 #include <fmt/format.h>
+#include <cmath>
 
 #include "coilfit/quantity.hpp"
 #include "io/format.hpp"

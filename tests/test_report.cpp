@@ -7,9 +7,9 @@
 #include <set>
 
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 #include "io/report_io.hpp"
 #include "io/spec_io.hpp"
-#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -45,17 +45,18 @@ TEST_SUITE("report") {
         const io::Json j = io::report_to_json(r);
         std::vector<std::string> keys;
         for (const auto& [k, v] : j.items()) keys.push_back(k);
-        const std::vector<std::string> contract{"schema", "tool", "verdict", "input", "quantities", "checks", "notes", "cautions"};
+        const std::vector<std::string> contract{"schema",     "tool",   "verdict", "input",
+                                                "quantities", "checks", "notes",   "cautions"};
         REQUIRE(keys.size() >= contract.size());
         CHECK(std::vector<std::string>(keys.begin(), keys.begin() + 8) == contract);
         CHECK(j["schema"] == "coilfit.report/1");
         CHECK(j["tool"]["name"] == "coilfit");
         CHECK(j["verdict"] == "pass");
-        for (const char* q : {"coil_current_nominal_a", "coil_current_max_a", "coil_voltage_min_v", "operate_voltage_hot_v",
-                              "base_resistor_max_ohm", "base_resistor_min_ohm", "base_resistor_ohm", "base_current_min_a",
-                              "pin_current_max_a", "forced_gain_worst", "hfe_needed", "transistor_power_w",
-                              "junction_temp_max_c", "peak_collector_voltage_v", "release_time_s", "clamp_energy_j",
-                              "stored_energy_j"}) {
+        for (const char* q :
+             {"coil_current_nominal_a", "coil_current_max_a", "coil_voltage_min_v", "operate_voltage_hot_v",
+              "base_resistor_max_ohm", "base_resistor_min_ohm", "base_resistor_ohm", "base_current_min_a",
+              "pin_current_max_a", "forced_gain_worst", "hfe_needed", "transistor_power_w", "junction_temp_max_c",
+              "peak_collector_voltage_v", "release_time_s", "clamp_energy_j", "stored_energy_j"}) {
             CAPTURE(q);
             CHECK(j["quantities"].contains(q));
             CHECK(j["quantities"][q].is_number());
@@ -89,7 +90,8 @@ TEST_SUITE("report") {
     }
 
     TEST_CASE("every example renders as text with the cautions and a result line") {
-        for (const char* name : {"greenhouse-valve.json", "dust-extractor.json", "garage-door.json", "lab-valve-manifold.json"}) {
+        for (const char* name :
+             {"greenhouse-valve.json", "dust-extractor.json", "garage-door.json", "lab-valve-manifold.json"}) {
             CAPTURE(name);
             const Loaded l = load_example(name);
             const SizingReport r = size(l.spec, l.table.catalogue);
@@ -115,7 +117,8 @@ TEST_SUITE("report") {
         const Loaded l = load_example("dust-extractor.json");
         const SizingReport r = size(l.spec, l.table.catalogue);
         bool found = false;
-        for (const auto& c : r.cautions) found = found || c.find("400 V AC, above extra-low voltage") != std::string::npos;
+        for (const auto& c : r.cautions)
+            found = found || c.find("400 V AC, above extra-low voltage") != std::string::npos;
         CHECK(found);
     }
 }

@@ -28,7 +28,9 @@ std::size_t count(const std::string& text, const std::string& what) {
     return n;
 }
 
-SizingReport report_of(const std::string& example) { return size(test::load_example(example), test::shipped_table().catalogue); }
+SizingReport report_of(const std::string& example) {
+    return size(test::load_example(example), test::shipped_table().catalogue);
+}
 
 // Wide enough that no phrase is wrapped, for finding words.
 io::TextStyle unwrapped() {
@@ -60,8 +62,8 @@ TEST_SUITE("report_text") {
     }
 
     TEST_CASE("every line of every example fits the width, from 40 to 160 columns") {
-        for (const char* name : {"greenhouse-valve.json", "dust-extractor.json", "garage-door.json", "lab-valve-manifold.json",
-                                 "greenhouse-vent.json"}) {
+        for (const char* name : {"greenhouse-valve.json", "dust-extractor.json", "garage-door.json",
+                                 "lab-valve-manifold.json", "greenhouse-vent.json"}) {
             const SizingReport r = report_of(name);
             for (std::size_t width : {40U, 50U, 60U, 80U, 100U, 120U, 160U}) {
                 CAPTURE(name);
@@ -90,7 +92,8 @@ TEST_SUITE("report_text") {
         // The garage door's 4 mA pin: hand-worked in the README, the pin needs at least 1.3 kΩ
         // while saturation at the worst corner needs at most 569 Ω.
         const std::string text = io::render_text(report_of("garage-door.json"), unwrapped());
-        CHECK(text.find("no resistor fits: the pin limit needs at least 1.3 kΩ, saturation needs at most 569 Ω") != std::string::npos);
+        CHECK(text.find("no resistor fits: the pin limit needs at least 1.3 kΩ, saturation needs at most 569 Ω") !=
+              std::string::npos);
         CHECK(text.find("(pin limit) to") == std::string::npos);
     }
 
@@ -109,7 +112,8 @@ TEST_SUITE("report_text") {
 
     TEST_CASE("skipped checks say why; failing ones what to change; each caution once") {
         const std::string text = io::render_text(report_of("garage-door.json"), unwrapped());
-        CHECK(text.find("skipped: give switching.frequency to estimate the clamp's average power") != std::string::npos);
+        CHECK(text.find("skipped: give switching.frequency to estimate the clamp's average power") !=
+              std::string::npos);
         CHECK(text.find("fix: the base resistor must be at least 1.3 kΩ") != std::string::npos);
         CHECK(count(text, "licensed practice") == 1);
         // The forced-gain policy sets the base current: no "needs hFE" advice beside "more hFE does not help".

@@ -98,11 +98,11 @@ TEST_SUITE("sizing") {
         const Spec s = hand_spec();
         const Sized z = size_numbers(s);
         const double r_cold = 400.0 * 0.9 * (1.0 + alpha * (-40.0));
-        const double i_max = 13.2 / r_cold;            // 0.04344 A
+        const double i_max = 13.2 / r_cold;  // 0.04344 A
         const double hfe_cold = 100.0 * std::pow(253.15 / 298.15, 1.5);
         CHECK(hfe_cold == Approx(78.23).epsilon(1e-3));
-        const double vbe_cold = 0.9 + 0.002 * 45.0;    // 0.99 V
-        const double ib_req = i_max / 10.0;            // forced gain 10 (hFE 78.2 / 2 = 39 is looser)
+        const double vbe_cold = 0.9 + 0.002 * 45.0;                     // 0.99 V
+        const double ib_req = i_max / 10.0;                             // forced gain 10 (hFE 78.2 / 2 = 39 is looser)
         const double rb_max = (3.3 * 0.95 - vbe_cold) / ib_req / 1.05;  // VDD low, Vbe(sat) cold, Rb +5 %
         CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
         // By hand: rb_max = 2.145 / 0.004344 / 1.05 = 469.6 Ω, just under 470 Ω: the E24 value below is 430 Ω.
@@ -167,7 +167,8 @@ TEST_SUITE("sizing") {
         const double rb_max = ((3.135 - 0.9) / (i_max / 10.0 + 0.9 / 47e3) - r_out) / 1.05;
         CHECK(test::flat(z.worst).pin_r_out_ohm == Approx(29.375));
         CHECK(test::flat(z.worst).base_resistor_max_ohm == Approx(rb_max));
-        CHECK(test::flat(z.worst).base_current_min_a == Approx((3.135 - 0.9) / (*z.r_drive_ohm * 1.05 + r_out) - 0.9 / 47e3));
+        CHECK(test::flat(z.worst).base_current_min_a ==
+              Approx((3.135 - 0.9) / (*z.r_drive_ohm * 1.05 + r_out) - 0.9 / 47e3));
         // With pin.voh_vdd the resistance is taken from that supply instead.
         s.pin.voh_vdd_v = 3.3;
         CHECK(test::flat(size_numbers(s).worst).pin_r_out_ohm == Approx(50.0));
@@ -306,7 +307,8 @@ TEST_SUITE("sizing") {
         s.load->current_a = 2.0;
         const SizingReport r = size(s, Catalogue{});
         bool mains = false;
-        for (const auto& c : r.cautions) mains = mains || c.find("local electrical codes and licensed practice") != std::string::npos;
+        for (const auto& c : r.cautions)
+            mains = mains || c.find("local electrical codes and licensed practice") != std::string::npos;
         CHECK(mains);
         CHECK(r.cautions.front().find("worst-case estimates") != std::string::npos);
         bool pulldown = false;

@@ -43,7 +43,8 @@ TEST_SUITE("spec") {
     TEST_CASE("presets start a coil or pin and the spec's own fields win") {
         std::string text = minimal;
         const std::string old_coil = R"("coil": { "rated_voltage": "12V", "resistance": "400R" })";
-        text.replace(text.find(old_coil), old_coil.size(), R"("coil": { "preset": "pcb-relay-12v-360mw", "tolerance": "5%" })");
+        text.replace(text.find(old_coil), old_coil.size(),
+                     R"("coil": { "preset": "pcb-relay-12v-360mw", "tolerance": "5%" })");
         const Spec s = read(text);
         CHECK(s.coil.rated_voltage_v == Approx(12.0));
         CHECK(s.coil.tolerance == Approx(0.05));
@@ -52,7 +53,8 @@ TEST_SUITE("spec") {
 
     TEST_CASE("inline part records are read like table records") {
         std::string text = minimal;
-        text.replace(text.find(R"("transistor": "2N4401")"), 22, R"("transistor": { "id": "MY-NPN", "kind": "npn", "ic_max": "1A", "vceo": "60V",
+        text.replace(text.find(R"("transistor": "2N4401")"), 22,
+                     R"("transistor": { "id": "MY-NPN", "kind": "npn", "ic_max": "1A", "vceo": "60V",
             "hfe_min": [ { "ic": "100mA", "min": 120 }, { "ic": "500mA", "min": 60 } ],
             "vce_sat": [ { "ic": "500mA", "ib": "50mA", "max": "0.5V" } ],
             "vbe_sat": [ { "ic": "500mA", "ib": "50mA", "max": "1.1V" } ],
@@ -73,7 +75,8 @@ TEST_SUITE("spec") {
         io::SpecDocument bad = io::parse_spec_text(minimal, "spec.json");
         io::set_field(bad, "coil.resistance", "12V", "--coil-resistance");
         CHECK_THROWS_WITH_AS((void)io::read_spec(bad, table()),
-                             "--coil-resistance: expected a resistance such as \"400R\", got \"12V\" (a voltage)", InputError);
+                             "--coil-resistance: expected a resistance such as \"400R\", got \"12V\" (a voltage)",
+                             InputError);
     }
 
     TEST_CASE("a whole spec can come from flags") {
@@ -92,15 +95,22 @@ TEST_SUITE("spec") {
     TEST_CASE("typos and unknown parts are errors naming the field") {
         std::string typo = minimal;
         typo.replace(typo.find("\"resistance\""), 12, "\"resistence\"");
-        CHECK_THROWS_WITH_AS(read(typo), "spec.json: coil.resistance: missing; expected a resistance such as \"400R\"", InputError);
+        CHECK_THROWS_WITH_AS(read(typo), "spec.json: coil.resistance: missing; expected a resistance such as \"400R\"",
+                             InputError);
         std::string extra = minimal;
         extra.replace(extra.find("\"max_current\""), 13, "\"max_curent\": 1, \"max_current\"");
-        CHECK_THROWS_WITH_AS(read(extra), "spec.json: pin.max_curent: unknown key (expected one of: max_current, preset, vdd, vdd_tolerance, voh, voh_current, voh_vdd)", InputError);
+        CHECK_THROWS_WITH_AS(read(extra),
+                             "spec.json: pin.max_curent: unknown key (expected one of: max_current, preset, vdd, "
+                             "vdd_tolerance, voh, voh_current, voh_vdd)",
+                             InputError);
         std::string unknown = minimal;
         unknown.replace(unknown.find("\"2N4401\""), 8, "\"2N9999\"");
         CHECK_THROWS_AS(read(unknown), InputError);
         std::string schema = minimal;
         schema.replace(schema.find("coilfit.spec/1"), 14, "coilfit.spec/9");
-        CHECK_THROWS_WITH_AS(read(schema), "spec.json: schema: expected \"coilfit.spec/1\" (the schema this coilfit reads), got \"coilfit.spec/9\"", InputError);
+        CHECK_THROWS_WITH_AS(
+            read(schema),
+            "spec.json: schema: expected \"coilfit.spec/1\" (the schema this coilfit reads), got \"coilfit.spec/9\"",
+            InputError);
     }
 }

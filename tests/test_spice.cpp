@@ -22,10 +22,10 @@
 #include <utility>
 
 #include "coilfit/sizing.hpp"
+#include "flat_figures.hpp"
 #include "io/netlist.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
-#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -35,7 +35,9 @@ namespace {
 
 const io::PartsTable& table() { return test::shipped_table(); }
 
-Spec spec_from(const std::string& json) { return io::read_spec(io::parse_spec_text(json, "spice-design.json"), table()); }
+Spec spec_from(const std::string& json) {
+    return io::read_spec(io::parse_spec_text(json, "spice-design.json"), table());
+}
 
 // Designs of our own, small and large coils, each clamp option.
 // 5 V pilot relay of a lab valve manifold, 70 ohm, 0.2 H, plain 1N4148.
@@ -64,7 +66,8 @@ const char* valve_relay_zener = R"({ "schema": "coilfit.spec/1", "name": "greenh
   "pin": { "vdd": "3.3V", "vdd_tolerance": "5%", "voh": "2.9V", "voh_current": "8mA", "max_current": "8mA" },
   "transistor": "2N4401", "clamp": { "type": "diode_zener", "diode": "1N4148", "zener": "1N4742A" }, "pulldown": "47k" })";
 // 24 V workshop dust-extractor interlock relay, 1.1 kohm, 3.3 H, diode + 680 ohm.
-const char* interlock_relay_resistor = R"({ "schema": "coilfit.spec/1", "name": "dust-extractor interlock relay, resistor",
+const char* interlock_relay_resistor =
+    R"({ "schema": "coilfit.spec/1", "name": "dust-extractor interlock relay, resistor",
   "supply": { "voltage": "24V", "tolerance": "10%" }, "ambient": { "min": "-10C", "max": "40C" },
   "coil": { "rated_voltage": "24V", "resistance": "1k1", "tolerance": "10%", "inductance": "3.3H" },
   "pin": { "preset": "cmos-3v3-8ma" }, "transistor": "MPSA06",
@@ -106,7 +109,8 @@ bool ngspice_found() { return std::system("command -v ngspice > /dev/null 2>&1")
 // Runs `ngspice -b` on the netlist and returns its .meas results by name.
 std::map<std::string, double> run_ngspice(const std::string& netlist, const std::string& tag) {
     namespace fs = std::filesystem;
-    const fs::path file = fs::temp_directory_path() / ("coilfit-spice-" + tag + "-" + std::to_string(::getpid()) + ".cir");
+    const fs::path file =
+        fs::temp_directory_path() / ("coilfit-spice-" + tag + "-" + std::to_string(::getpid()) + ".cir");
     {
         std::ofstream out(file);
         out << netlist;
@@ -161,9 +165,9 @@ Compared check_against_ngspice(const Spec& spec, const std::string& tag, double 
     c.sim_current_a = meas.count("coil_current_on") ? meas.at("coil_current_on") : 0;
     c.sim_peak_v = meas.count("peak_collector") ? meas.at("peak_collector") : 0;
     c.sim_release_s = meas.count("release_time") ? meas.at("release_time") : 0;
-    INFO(spec.name << ": current " << c.report_current_a << " A (ngspice " << c.sim_current_a << "), peak " << c.report_peak_v
-                   << " V (ngspice " << c.sim_peak_v << "), release " << c.report_release_s << " s (ngspice "
-                   << c.sim_release_s << ")");
+    INFO(spec.name << ": current " << c.report_current_a << " A (ngspice " << c.sim_current_a << "), peak "
+                   << c.report_peak_v << " V (ngspice " << c.sim_peak_v << "), release " << c.report_release_s
+                   << " s (ngspice " << c.sim_release_s << ")");
     // Reference: ngspice transient of the exported netlist.
     CHECK(c.report_current_a == Approx(c.sim_current_a).epsilon(0.02));
     CHECK(c.report_peak_v >= 0.99 * c.sim_peak_v);
@@ -235,7 +239,8 @@ TEST_SUITE("spice") {
         check_design(lab_relay_nmos, "lab-nmos");
     }
 
-    TEST_CASE("ngspice agrees with the report for a 12 V relay on a transistor-array channel, Darlington and MOSFET class") {
+    TEST_CASE(
+        "ngspice agrees with the report for a 12 V relay on a transistor-array channel, Darlington and MOSFET class") {
         // One array channel as its input resistor and a Darlington pair (or a level-1 NMOS for
         // the MOSFET class), clamped by the built-in diode. The report's highest coil current
         // neglects the on-voltage (sizing.hpp assumption 4), which a Darlington cannot: the
@@ -267,8 +272,8 @@ TEST_SUITE("spice") {
             const double report_i = report.quantity("coil_current_max_a").value_or(0);
             const double peak = report.quantity("peak_collector_voltage_v").value_or(0);
             const double release = report.quantity("release_time_s").value_or(0);
-            INFO(id << ": current " << report_i << " A (ngspice " << sim_i << ", on-voltage " << v_on << " V), peak " << peak
-                    << " V (ngspice " << meas.at("peak_collector") << "), release " << release << " s (ngspice "
+            INFO(id << ": current " << report_i << " A (ngspice " << sim_i << ", on-voltage " << v_on << " V), peak "
+                    << peak << " V (ngspice " << meas.at("peak_collector") << "), release " << release << " s (ngspice "
                     << meas.at("release_time") << ")");
             CHECK(report_i >= 0.99 * sim_i);
             CHECK((report.sized.conditions.vs_hi_v - v_on) / r_cold == Approx(sim_i).epsilon(0.02));
@@ -310,7 +315,8 @@ TEST_SUITE("spice") {
             if (entry.path().extension() != ".json") continue;
             if (entry.path().stem().string().find("-board") != std::string::npos) continue;  // coilfit board files
             const Spec spec = io::read_spec(io::load_spec_document(entry.path().string()), table());
-            if (!spec.coil.inductance_h || spec.clamp.type == ClampType::none || !size_numbers(spec).r_drive_ohm) continue;
+            if (!spec.coil.inductance_h || spec.clamp.type == ClampType::none || !size_numbers(spec).r_drive_ohm)
+                continue;
             INFO(entry.path().string());
             check_against_ngspice(spec, "example-" + entry.path().stem().string());
         }

@@ -5,9 +5,9 @@
 #include <string>
 
 #include "coilfit/yield.hpp"
+#include "flat_figures.hpp"
 #include "io/parts_io.hpp"
 #include "io/spec_io.hpp"
-#include "flat_figures.hpp"
 #include "support.hpp"
 
 using namespace coilfit;
@@ -217,7 +217,8 @@ TEST_SUITE("yield") {
         s.seed = 42;
         s.samples = 1000;
         s.jobs = 1;
-        const YieldCounts head = count_samples(prepare(spec), one.design.conditions, one.design.r_drive_ohm.value_or(0), s, 0, 1000);
+        const YieldCounts head =
+            count_samples(prepare(spec), one.design.conditions, one.design.r_drive_ohm.value_or(0), s, 0, 1000);
         const YieldResult short_run = run_yield(spec, s);
         CHECK(short_run.passed == head.passed);
     }
@@ -307,7 +308,9 @@ TEST_SUITE("yield") {
         CHECK(r.interval.hi >= r.pass_rate);
     }
 
-    TEST_CASE("by default the conditions stay at each check's worst corner: a design failing only at the lowest supply yields 0 %") {
+    TEST_CASE(
+        "by default the conditions stay at each check's worst corner: a design failing only at the lowest supply "
+        "yields 0 %") {
         // src/method.md "Statistical yield": yield is about part-to-part spread. The marginal
         // design fails coil.operate at the lowest supply with a hot coil; every unit meets that
         // supply, so none is guaranteed: 0 % held at the corner, clearly more with the

@@ -68,17 +68,17 @@ struct Decay {
 struct ClampCorner {
     double i0_a = 0;
     ClampVoltages v{};
-    double peak_collector_v = 0;   // Vs_hi + the highest clamp voltage (or the transient, if higher)
-    bool has_timing = false;       // inductance given and the clamp limits the voltage
+    double peak_collector_v = 0;  // Vs_hi + the highest clamp voltage (or the transient, if higher)
+    bool has_timing = false;      // inductance given and the clamp limits the voltage
     double release_time_s = 0, current_zero_time_s = 0, charge_c = 0;  // timing corner
-    double slow_tau_s = 0, slow_vc_over_r_a = 0;  // the timing corner's decay: tau and Vc/R
-    bool end_time_is_bound = false;  // verdicts only: current_zero_time_s is the bound L I0 / Vc
-    double energy_j = 0, charge_peak_c = 0;                            // energy corner
-    double avalanche_j = 0;        // no clamp, a MOSFET rated for it: the energy per turn-off
+    double slow_tau_s = 0, slow_vc_over_r_a = 0;                       // the timing corner's decay: tau and Vc/R
+    bool end_time_is_bound = false;          // verdicts only: current_zero_time_s is the bound L I0 / Vc
+    double energy_j = 0, charge_peak_c = 0;  // energy corner
+    double avalanche_j = 0;                  // no clamp, a MOSFET rated for it: the energy per turn-off
     // The pulse each turn-off drives into a zener or TVS (src/method.md, pulse rating).
     bool has_pulse = false;
     double pulse_peak_w = 0, pulse_energy_j = 0, pulse_width_s = 0, pulse_rating_w = 0;
-    bool has_rate = false;         // and a switching frequency
+    bool has_rate = false;  // and a switching frequency
     double clamp_power_w = 0, diode_average_current_a = 0, zener_power_w = 0, resistor_power_w = 0;
 };
 

@@ -10,10 +10,10 @@ namespace coilfit {
 
 struct Conditions {
     // operating conditions
-    double vs_lo_v = 0, vs_hi_v = 0;              // supply
-    double vs_transient_v = 0;                    // highest transient on the rail (0: none given)
-    double ta_lo_c = 0, ta_hi_c = 0;              // ambient
-    double vdd_lo_v = 0, vdd_hi_v = 0;            // pin supply
+    double vs_lo_v = 0, vs_hi_v = 0;    // supply
+    double vs_transient_v = 0;          // highest transient on the rail (0: none given)
+    double ta_lo_c = 0, ta_hi_c = 0;    // ambient
+    double vdd_lo_v = 0, vdd_hi_v = 0;  // pin supply
     // part spreads
     double r_coil_lo_ohm = 0, r_coil_hi_ohm = 0;  // coil resistance at its reference temperature
     double rb_lo_factor = 1, rb_hi_factor = 1;    // base or gate resistor (and pull-down): 1 -+ tb

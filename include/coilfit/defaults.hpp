@@ -42,7 +42,7 @@ inline constexpr double zener_knee_factor = 0.90;
 
 // N-MOSFET drive (src/method.md "N-MOSFET driver")
 inline constexpr double nmos_pulldown_ohm = 100e3;
-inline constexpr double rds_on_tempco_per_k = 0.006;  // from memory: Rds(on) x1.5-1.7 at 125 °C
+inline constexpr double rds_on_tempco_per_k = 0.006;    // from memory: Rds(on) x1.5-1.7 at 125 °C
 inline constexpr double vgs_th_tempco_v_per_k = 0.004;  // from memory: Vgs(th) falls about 4 mV/K
 inline constexpr double vplateau_above_threshold_v = 1.0;
 inline constexpr double slow_gate_s = 10e-6;

@@ -35,14 +35,14 @@ struct DriverCorner {
 
 struct DriverCommon {
     std::array<DriverCorner, corner_count> at{};
-    std::string_view drop_name = "Vce(sat)";   // words for the on-state drop
-    std::string_view terminal = "collector";   // collector, drain, output
-    std::string_view rating_name = "Vceo";     // the voltage rating
+    std::string_view drop_name = "Vce(sat)";           // words for the on-state drop
+    std::string_view terminal = "collector";           // collector, drain, output
+    std::string_view rating_name = "Vceo";             // the voltage rating
     std::string_view resistor_name = "base resistor";  // "" when the drive resistor is built in
-    double resistor_ohm = 0;     // the design's base or gate resistor (0: none could be chosen)
-    double rated_voltage_v = 0;  // Vceo, Vds max
-    double peak_limit_v = 0;     // the derated rating: the peak the clamp must keep below
-    double avalanche_j = 0;      // repetitive avalanche rating (nmos with ear), else 0
+    double resistor_ohm = 0;                           // the design's base or gate resistor (0: none could be chosen)
+    double rated_voltage_v = 0;                        // Vceo, Vds max
+    double peak_limit_v = 0;                           // the derated rating: the peak the clamp must keep below
+    double avalanche_j = 0;                            // repetitive avalanche rating (nmos with ear), else 0
 };
 
 }  // namespace coilfit

@@ -16,12 +16,13 @@ namespace coilfit {
 [[nodiscard]] std::size_t edit_distance(std::string_view a, std::string_view b);
 
 struct IdMatch {
-    std::optional<std::string> id;        // the id matched (exactly, or the one case-insensitive match)
-    std::vector<std::string> ambiguous;   // several ids equal to it but for case
+    std::optional<std::string> id;       // the id matched (exactly, or the one case-insensitive match)
+    std::vector<std::string> ambiguous;  // several ids equal to it but for case
 };
 [[nodiscard]] IdMatch match_id(std::string_view wanted, const std::vector<std::string>& ids);
 // Up to n ids nearest to wanted, nearest first (ties by id), each within max(2, half the
 // length of wanted) edits.
-[[nodiscard]] std::vector<std::string> nearest_ids(std::string_view wanted, const std::vector<std::string>& ids, std::size_t n = 3);
+[[nodiscard]] std::vector<std::string> nearest_ids(std::string_view wanted, const std::vector<std::string>& ids,
+                                                   std::size_t n = 3);
 
 }  // namespace coilfit

@@ -60,10 +60,10 @@ struct Bipolar : PartOrigin {
     std::vector<SaturationPoint> vce_sat;
     std::vector<SaturationPoint> vbe_sat;
     double pd_w = 0;
-    std::optional<double> rth_ja_k_per_w;      // when absent: (tj_max - 25 °C) / pd
+    std::optional<double> rth_ja_k_per_w;  // when absent: (tj_max - 25 °C) / pd
     double tj_max_c = 150;
-    std::optional<double> hfe_temp_exponent;   // x_h of hFE(T) = hFE(25 °C) (T/298.15 K)^x_h
-    std::optional<double> r_be_internal_ohm;   // a Darlington's base-emitter resistor inside
+    std::optional<double> hfe_temp_exponent;  // x_h of hFE(T) = hFE(25 °C) (T/298.15 K)^x_h
+    std::optional<double> r_be_internal_ohm;  // a Darlington's base-emitter resistor inside
 };
 
 // --- N-channel MOSFETs (nmos) ------------------------------------------------------------------
@@ -81,11 +81,11 @@ struct Mosfet : PartOrigin {
     double vgs_max_v = 0;
     double vgs_th_min_v = 0;
     double vgs_th_max_v = 0;
-    std::vector<RdsOnPoint> rds_on;             // sorted by vgs
-    std::optional<double> rds_on_tempco_per_k;  // default 0.6 %/K
+    std::vector<RdsOnPoint> rds_on;               // sorted by vgs
+    std::optional<double> rds_on_tempco_per_k;    // default 0.6 %/K
     std::optional<double> vgs_th_tempco_v_per_k;  // magnitude used; default 4 mV/K
-    double qg_c = 0;                            // total gate charge
-    std::optional<double> vplateau_v;           // Miller plateau; default Vgs(th) max + 1 V
+    double qg_c = 0;                              // total gate charge
+    std::optional<double> vplateau_v;             // Miller plateau; default Vgs(th) max + 1 V
     double pd_w = 0;
     std::optional<double> rth_ja_k_per_w;
     double tj_max_c = 150;
@@ -131,8 +131,8 @@ struct ArrayPart : PartOrigin {
     std::vector<CurrentPoint> vce_sat;
     double ic_max_a = 0;  // per channel
     double vceo_v = 0;
-    Diode diode;          // the built-in clamp diode to the common pin
-    double pd_w = 0;      // package
+    Diode diode;      // the built-in clamp diode to the common pin
+    double pd_w = 0;  // package
     std::optional<double> rth_ja_k_per_w;
     double tj_max_c = 150;
     std::optional<double> ic_total_max_a;
@@ -150,17 +150,17 @@ struct Zener : PartOrigin {
     double tolerance = 0.05;
     double pd_w = 0;
     std::optional<double> izt_a;
-    std::optional<double> zzt_ohm;          // dynamic impedance at izt
+    std::optional<double> zzt_ohm;            // dynamic impedance at izt
     std::optional<double> vz_tempco_v_per_k;  // absolute drift (a relative one times vz)
-    std::vector<PulsePoint> pulse;          // sorted by width
+    std::vector<PulsePoint> pulse;            // sorted by width
 };
 
 struct Tvs : PartOrigin {
-    double vrwm_v = 0;  // standoff
+    double vrwm_v = 0;                    // standoff
     double vbr_min_v = 0, vbr_max_v = 0;  // breakdown at 1 mA
-    double vc_v = 0;    // clamping voltage at ipp
+    double vc_v = 0;                      // clamping voltage at ipp
     double ipp_a = 0;
-    double ppk_w = 0;   // peak pulse power at ppk_width
+    double ppk_w = 0;  // peak pulse power at ppk_width
     double ppk_width_s = 1e-3;
 };
 
@@ -168,8 +168,8 @@ struct Tvs : PartOrigin {
 
 using Transistor = std::variant<Bipolar, Mosfet, ArrayPart>;
 
-[[nodiscard]] std::string_view bipolar_kind_name(BipolarKind kind);  // "npn", "darlington"
-[[nodiscard]] std::string_view diode_kind_name(DiodeKind kind);      // "rectifier", ...
+[[nodiscard]] std::string_view bipolar_kind_name(BipolarKind kind);        // "npn", "darlington"
+[[nodiscard]] std::string_view diode_kind_name(DiodeKind kind);            // "rectifier", ...
 [[nodiscard]] std::string_view transistor_kind_name(const Transistor& t);  // npn, darlington, nmos, array
 [[nodiscard]] const PartOrigin& origin(const Transistor& t);
 

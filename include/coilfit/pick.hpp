@@ -28,20 +28,20 @@ namespace coilfit {
 
 struct Candidate {
     std::string transistor;
-    std::string driver;                 // npn, darlington, nmos, array
-    std::string diode;                  // empty for clamp "none"
-    std::string family;                 // "small-signal", "medium-power", "darlington", ...
+    std::string driver;                  // npn, darlington, nmos, array
+    std::string diode;                   // empty for clamp "none"
+    std::string family;                  // "small-signal", "medium-power", "darlington", ...
     std::optional<double> resistor_ohm;  // base or gate resistor
-    Verdict verdict = Verdict::fail;    // pass | fail
-    std::string worst_check;            // id of the check with the smallest margin
+    Verdict verdict = Verdict::fail;     // pass | fail
+    std::string worst_check;             // id of the check with the smallest margin
     double worst_margin = 0;
     std::optional<double> window_ratio;  // bipolar: Rb_max / Rb_min
-    double margin_other = 0;            // the smallest margin of the checks other than saturation
-    bool beyond_data = false;           // a check used a part value beyond the part's data
+    double margin_other = 0;             // the smallest margin of the checks other than saturation
+    bool beyond_data = false;            // a check used a part value beyond the part's data
     double pin_current_max_a = 0;
-    std::vector<std::string> failed;    // ids of failed checks
-    std::size_t clamps_tried = 1;       // diodes tried behind this transistor (1 with all_clamps)
-    std::size_t clamps_passing = 0;     // of which pass
+    std::vector<std::string> failed;  // ids of failed checks
+    std::size_t clamps_tried = 1;     // diodes tried behind this transistor (1 with all_clamps)
+    std::size_t clamps_passing = 0;   // of which pass
 };
 
 struct PickSettings {
@@ -53,9 +53,9 @@ struct PickResult {
     std::vector<Candidate> candidates;  // best first
     // When nothing passes: one line per transistor family saying why.
     std::vector<std::string> reasons;
-    std::size_t rows = 0;        // rows there were, before `top` cut them
-    std::size_t passing = 0;     // of which pass
-    std::size_t evaluations = 0; // designs sized (transistor and diode pairs)
+    std::size_t rows = 0;         // rows there were, before `top` cut them
+    std::size_t passing = 0;      // of which pass
+    std::size_t evaluations = 0;  // designs sized (transistor and diode pairs)
 };
 
 // Ranks two rows: true when a comes before b (the order above).

@@ -19,8 +19,8 @@ public:
 };
 
 enum class Unit {
-    ratio,            // dimensionless: 0.1 or "10%" (gains are plain numbers)
-    number,           // dimensionless count or gain; "%" not accepted
+    ratio,   // dimensionless: 0.1 or "10%" (gains are plain numbers)
+    number,  // dimensionless count or gain; "%" not accepted
     volt,
     ampere,
     ohm,

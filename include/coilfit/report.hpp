@@ -27,9 +27,9 @@ struct Check {
     // for lower limits. Positive passes, negative fails; absent when not computable.
     std::optional<double> margin;
     std::string message;
-    std::string reason;          // why a check was skipped (empty otherwise)
+    std::string reason;            // why a check was skipped (empty otherwise)
     Corner corner = Corner::cold;  // the ambient corner of the value
-    bool beyond_data = false;    // it used a part value beyond the part's data
+    bool beyond_data = false;      // it used a part value beyond the part's data
 };
 
 // One entry of the flat "quantities" object: key with unit suffix ("coil_current_max_a").
@@ -43,7 +43,7 @@ struct QuantityEntry {
 // The drive resistor of the design (base or gate resistor; none for an array channel).
 struct ResistorReport {
     std::string_view kind = "base resistor";  // "base resistor", "gate resistor", "" (built in)
-    std::optional<double> value_ohm;  // absent when no value of the series can work
+    std::optional<double> value_ohm;          // absent when no value of the series can work
     ESeries series = ESeries::e24;
     double tolerance = 0.05;
     std::optional<double> power_rating_w;
@@ -53,16 +53,16 @@ struct ResistorReport {
 
 // One row of the clamp trade-off table (diode alone, diode + zener, ...).
 struct ClampOption {
-    std::string label;                // "diode 1N4148", "diode + zener 1N4742A (12 V)"
-    ClampSpec clamp;                  // the clamp it stands for (the plot draws each option)
-    double peak_collector_v = 0;      // at the corner that is worst for it
+    std::string label;            // "diode 1N4148", "diode + zener 1N4742A (12 V)"
+    ClampSpec clamp;              // the clamp it stands for (the plot draws each option)
+    double peak_collector_v = 0;  // at the corner that is worst for it
     std::optional<double> release_time_s;
     double clamp_energy_j = 0;
-    bool within_rating = true;        // collector within the transistor's derated rating (and pulse)
-    std::string failed_check;         // the first check this option fails, if any
+    bool within_rating = true;              // collector within the transistor's derated rating (and pulse)
+    std::string failed_check;               // the first check this option fails, if any
     Verdict pulse_verdict = Verdict::skip;  // clamp.pulse of a zener or TVS option
-    bool chosen = false;              // the clamp the spec uses
-    std::optional<TurnOff> turn_off;  // its decay for the plot (with an inductance and a clamp)
+    bool chosen = false;                    // the clamp the spec uses
+    std::optional<TurnOff> turn_off;        // its decay for the plot (with an inductance and a clamp)
 };
 
 // The contact side of the report (src/method.md "Contact side"): what the contacts switch, the
@@ -71,7 +71,7 @@ struct ContactReport {
     std::string relay;  // "pcb-power-relay-12v-16a (relay, 1 form A)", or "none given"
     std::string load;   // "24 V DC motor, 8 A steady"
     std::optional<double> inrush_a;
-    std::string inrush_words;  // how the inrush was found ("6 x steady, the default for a motor ...")
+    std::string inrush_words;              // how the inrush was found ("6 x steady, the default for a motor ...")
     std::vector<std::string> suppression;  // advice, one line each
     std::optional<double> snubber_capacitance_f, snubber_resistance_ohm;  // AC inductive load
     std::optional<double> varistor_voltage_v;                             // AC inductive load
@@ -81,8 +81,8 @@ struct ContactReport {
 };
 
 struct SizingReport {
-    Spec spec;    // the inputs as understood
-    Sized sized;  // the design and its worst-case evaluation
+    Spec spec;                        // the inputs as understood
+    Sized sized;                      // the design and its worst-case evaluation
     Verdict verdict = Verdict::fail;  // pass | fail (warnings do not fail)
     bool has_warnings = false;
     ResistorReport resistor;

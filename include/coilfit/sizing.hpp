@@ -55,7 +55,7 @@ using DriverFigures = std::variant<std::monostate, BipolarFigures, MosfetFigures
 struct Prepared {
     const Spec* spec = nullptr;
     Driver driver;
-    double pin_r_out_ohm = 0;        // (VDD_voh - VOH) / IOH, 0 when VOH is not given
+    double pin_r_out_ohm = 0;  // (VDD_voh - VOH) / IOH, 0 when VOH is not given
     const Diode* clamp_diode = nullptr;
     double derated_vrrm_v = 0;
     double diode_peak_limit_a = 0;   // repetitive peak rating, else the average rating

@@ -39,16 +39,16 @@ struct AmbientSpec {
 struct CoilSpec {
     std::string preset;  // the preset the fields started from, if any
     double rated_voltage_v = 0;
-    double resistance_ohm = 0;           // at reference_temp_c
+    double resistance_ohm = 0;                    // at reference_temp_c
     double tolerance = defaults::coil_tolerance;  // of the resistance
     double reference_temp_c = defaults::coil_reference_temp_c;
-    double must_operate = defaults::must_operate;  // fraction of rated voltage
-    double must_release = defaults::must_release;  // fraction of rated voltage
-    std::optional<double> must_operate_temp_c;     // coil temperature the must-operate is stated at
-    std::optional<double> self_heating_k;          // winding rise above ambient when energised
+    double must_operate = defaults::must_operate;      // fraction of rated voltage
+    double must_release = defaults::must_release;      // fraction of rated voltage
+    std::optional<double> must_operate_temp_c;         // coil temperature the must-operate is stated at
+    std::optional<double> self_heating_k;              // winding rise above ambient when energised
     std::optional<double> thermal_resistance_k_per_w;  // winding to ambient: the rise from its power
-    std::optional<double> max_temperature_c;       // insulation class limit
-    std::optional<double> inductance_h;  // energised (armature closed) inductance
+    std::optional<double> max_temperature_c;           // insulation class limit
+    std::optional<double> inductance_h;                // energised (armature closed) inductance
     std::optional<double> max_voltage_v;
     std::optional<double> max_release_time_s;
 };
@@ -62,10 +62,10 @@ struct PinSpec {
     std::string preset;
     double vdd_v = 0;
     double vdd_tolerance = defaults::pin_vdd_tolerance;
-    std::optional<double> voh_v;          // guaranteed output high at voh_current_a
+    std::optional<double> voh_v;  // guaranteed output high at voh_current_a
     std::optional<double> voh_current_a;
-    std::optional<double> voh_vdd_v;      // the supply VOH is stated at (default: the lowest VDD)
-    double max_current_a = 0;             // the most the pin may source
+    std::optional<double> voh_vdd_v;  // the supply VOH is stated at (default: the lowest VDD)
+    double max_current_a = 0;         // the most the pin may source
 };
 
 struct ClampSpec {
@@ -73,7 +73,7 @@ struct ClampSpec {
     std::optional<Diode> diode;
     std::optional<Zener> zener;
     std::optional<Tvs> tvs;
-    std::optional<double> resistor_ohm;   // diode_resistor only
+    std::optional<double> resistor_ohm;  // diode_resistor only
     double resistor_tolerance = defaults::clamp_resistor_tolerance;
     double resistor_power_w = defaults::clamp_resistor_power_w;
 };
@@ -95,14 +95,14 @@ struct GateResistorSpec {
 };
 
 struct Policy {
-    std::optional<double> forced_gain;  // default 10 (npn) or the Vce(sat) test ratio (darlington)
+    std::optional<double> forced_gain;       // default 10 (npn) or the Vce(sat) test ratio (darlington)
     double overdrive = defaults::overdrive;  // k: drive over minimum gain
     double current_derating = defaults::current_derating;
     double voltage_derating = defaults::voltage_derating;
     double junction_margin_k = defaults::junction_margin_k;
     double power_derating = defaults::power_derating;  // of resistor and zener power ratings
     double pulse_derating = defaults::pulse_derating;  // of a zener's or TVS's surge rating
-    double vbe_low_v = defaults::vbe_low_v;  // the lowest Vbe, for the highest pin current
+    double vbe_low_v = defaults::vbe_low_v;            // the lowest Vbe, for the highest pin current
 };
 
 struct SwitchingSpec {
@@ -130,10 +130,10 @@ struct Spec {
     AmbientSpec ambient;
     CoilSpec coil;
     PinSpec pin;
-    Transistor transistor;           // its kind selects the driver
+    Transistor transistor;  // its kind selects the driver
     ClampSpec clamp;
-    BaseResistorSpec base_resistor;  // bipolar drivers
-    GateResistorSpec gate_resistor;  // nmos drivers
+    BaseResistorSpec base_resistor;      // bipolar drivers
+    GateResistorSpec gate_resistor;      // nmos drivers
     std::optional<double> pulldown_ohm;  // base-emitter or gate-source pull-down
     Policy policy;
     SwitchingSpec switching;

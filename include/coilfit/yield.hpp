@@ -39,7 +39,15 @@ enum class Distribution : std::uint8_t { uniform, normal };
 
 // The inputs a sample varies, in the order of their generator streams.
 enum class YieldInput : std::uint8_t {
-    supply, ambient, pin_vdd, coil_resistance, base_resistor, zener, gain, clamp_resistor, rds_on
+    supply,
+    ambient,
+    pin_vdd,
+    coil_resistance,
+    base_resistor,
+    zener,
+    gain,
+    clamp_resistor,
+    rds_on
 };
 inline constexpr std::size_t yield_input_count = 9;
 [[nodiscard]] std::string_view yield_input_name(YieldInput input);  // "supply.voltage", ...
@@ -57,9 +65,7 @@ inline constexpr std::size_t yield_input_count = 9;
 // 64 random bits for (seed, sample index, stream), independent of any other call.
 [[nodiscard]] std::uint64_t random_bits(std::uint64_t seed, std::uint64_t sample, std::uint64_t stream);
 // Uniform in [0, 1) with 53 random bits: exact, no rounding (k * 2^-53).
-[[nodiscard]] constexpr double unit_uniform(std::uint64_t bits) {
-    return static_cast<double>(bits >> 11) * 0x1.0p-53;
-}
+[[nodiscard]] constexpr double unit_uniform(std::uint64_t bits) { return static_cast<double>(bits >> 11) * 0x1.0p-53; }
 // Inverse of the standard normal distribution function, p in (0, 1) (Acklam's rational
 // approximation, relative error below 1.2e-9).
 [[nodiscard]] double normal_quantile(double p);
@@ -98,7 +104,7 @@ struct YieldSettings {
 // Integer tallies: summed over threads in any order, they give the same result.
 struct YieldCounts {
     std::uint64_t samples = 0;
-    std::uint64_t passed = 0;                          // no check failed (warnings pass)
+    std::uint64_t passed = 0;                            // no check failed (warnings pass)
     std::array<std::uint64_t, check_count> evaluated{};  // the check was not skipped
     std::array<std::uint64_t, check_count> failed{};
     YieldCounts& operator+=(const YieldCounts& other);
@@ -131,11 +137,11 @@ struct CheckYield {
 
 struct YieldResult {
     YieldSettings settings;
-    Sized design;                       // the design under test and its worst-case evaluation
+    Sized design;  // the design under test and its worst-case evaluation
     std::uint64_t passed = 0;
     double pass_rate = 0;
-    Interval interval;                  // 95 % Wilson score interval of pass_rate
-    std::vector<CheckYield> checks;     // checks that applied in at least one sample, report order
+    Interval interval;                             // 95 % Wilson score interval of pass_rate
+    std::vector<CheckYield> checks;                // checks that applied in at least one sample, report order
     std::optional<CheckId> most_frequent_failure;  // none when every sample passed
 };
 
@@ -144,9 +150,11 @@ using YieldProgress = std::function<void(std::uint64_t, std::uint64_t)>;
 
 // Sizes the spec (size_numbers), then runs settings.samples samples on settings.jobs threads.
 // The result is the same for any number of jobs. Pure apart from the threads it starts.
-[[nodiscard]] YieldResult run_yield(const Spec& spec, const YieldSettings& settings, const YieldProgress& progress = {});
+[[nodiscard]] YieldResult run_yield(const Spec& spec, const YieldSettings& settings,
+                                    const YieldProgress& progress = {});
 
 // Summarises tallies (split out so tests can build results from counts).
-[[nodiscard]] YieldResult summarise_yield(const Sized& design, const YieldSettings& settings, const YieldCounts& counts);
+[[nodiscard]] YieldResult summarise_yield(const Sized& design, const YieldSettings& settings,
+                                          const YieldCounts& counts);
 
 }  // namespace coilfit

@@ -45,7 +45,10 @@ CLI::Validator whole_number(std::uint64_t min, std::uint64_t max) {
 // A file name: anything but an empty text (an empty --parts must not fall back to the default).
 CLI::Validator file_name() {
     return CLI::Validator(
-        [](std::string& s) { return s.empty() ? std::string("expected a file name, got an empty text") : std::string(); }, "");
+        [](std::string& s) {
+            return s.empty() ? std::string("expected a file name, got an empty text") : std::string();
+        },
+        "");
 }
 
 // One of a few words, in our wording ("expected text or json, got \"xml\"").
@@ -121,13 +124,15 @@ CLI::App* setup_size(CLI::App& app, SizeOptions& options) {
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)")->group("Size");
     cmd->add_flag("--brief", options.brief, "text: only the verdict, the design and the failing or warning checks")
         ->group("Size");
-    cmd->add_option("--netlist", options.netlist, "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
+    cmd->add_option("--netlist", options.netlist,
+                    "also write a SPICE netlist of the sized circuit to FILE (written like --output)")
         ->group("Size")
         ->type_name("FILE")
         ->check(file_name());
-    cmd->add_option("--plot", options.plot,
-                    "also draw the turn-off transient of every clamp option (coil current and collector voltage against "
-                    "time) into FILE.svg (written like --output); needs coil.inductance")
+    cmd->add_option(
+           "--plot", options.plot,
+           "also draw the turn-off transient of every clamp option (coil current and collector voltage against "
+           "time) into FILE.svg (written like --output); needs coil.inductance")
         ->group("Size")
         ->type_name("FILE.svg")
         ->check(file_name());
@@ -145,7 +150,8 @@ CLI::App* setup_pick(CLI::App& app, PickOptions& options) {
         ->type_name("N")
         ->default_str("0: all")
         ->check(whole_number(0, 1'000'000'000));
-    cmd->add_flag("--all-clamps", options.all_clamps, "a row for every transistor and diode pair, not one per transistor")
+    cmd->add_flag("--all-clamps", options.all_clamps,
+                  "a row for every transistor and diode pair, not one per transistor")
         ->group("Pick");
     add_common_options(*cmd, options.common, true);
     add_spec_options(*cmd, options.spec);
@@ -208,9 +214,11 @@ CLI::App* setup_board(CLI::App& app, BoardOptions& options) {
                                        "package, supply, array package) at the worst set of channels on at once.");
     cmd->add_option("BOARD", options.board_path, "board file (coilfit.board/1), or - for standard input")->required();
     const std::string group = "Board";
-    cmd->add_flag("--brief", options.brief, "the channel lines, the checks that fail or warn, and the verdict")->group(group);
+    cmd->add_flag("--brief", options.brief, "the channel lines, the checks that fail or warn, and the verdict")
+        ->group(group);
     cmd->add_flag("--strict", options.strict, "warnings fail too (exit 1)")->group(group);
-    cmd->add_option("--channel", options.channel, "print one channel's full report (its name, its pin, or an entry's name)")
+    cmd->add_option("--channel", options.channel,
+                    "print one channel's full report (its name, its pin, or an entry's name)")
         ->group(group)
         ->type_name("NAME");
     add_common_options(*cmd, options.common, true);
@@ -353,10 +361,8 @@ std::optional<int> parse_command_line(int argc, char** argv, Invocation& into) {
     app.option_defaults()->multi_option_policy(CLI::MultiOptionPolicy::TakeLast);
 
     const std::vector<std::pair<CLI::App*, Command>> commands{
-        {setup_size(app, into.size), Command::size},
-        {setup_pick(app, into.pick), Command::pick},
-        {setup_yield(app, into.yield), Command::yield},
-        {setup_board(app, into.board), Command::board},
+        {setup_size(app, into.size), Command::size},    {setup_pick(app, into.pick), Command::pick},
+        {setup_yield(app, into.yield), Command::yield}, {setup_board(app, into.board), Command::board},
         {setup_parts(app, into.parts), Command::parts},
     };
     for (const auto& [cmd, id] : commands) cmd->get_help_ptr()->description("show this help")->group(general_group);

@@ -46,7 +46,8 @@ int run_board(const BoardOptions& options) {
     const bool json = options.common.format == "json";
     if (!options.channel.empty()) {
         const SizingReport report = size(find_channel(board, options.channel, doc.origin.file).spec, table.catalogue);
-        emit(json ? io::report_to_json(report).dump(2) + "\n" : io::render_text(report, style), options.common.output, inputs);
+        emit(json ? io::report_to_json(report).dump(2) + "\n" : io::render_text(report, style), options.common.output,
+             inputs);
         return exit_code(report.verdict, report.has_warnings, options.strict);
     }
     const BoardReport report = size_board(board, table.catalogue);

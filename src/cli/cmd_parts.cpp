@@ -76,20 +76,33 @@ std::vector<Entry> transistor_entries(const Catalogue& cat) {
     std::vector<Entry> out;
     for (const auto& b : cat.bipolars) {
         std::string gains;
-        for (const auto& g : b.hfe_min) gains += (gains.empty() ? "" : ", ") + q(g.hfe_min, Unit::number) + " at " + q(g.ic_a, Unit::ampere);
+        for (const auto& g : b.hfe_min)
+            gains += (gains.empty() ? "" : ", ") + q(g.hfe_min, Unit::number) + " at " + q(g.ic_a, Unit::ampere);
         const std::string kind(bipolar_kind_name(b.kind));
-        out.push_back({g_bipolar, kind, b.id, io::to_json(b),
-                       {b.id, kind, q(b.ic_max_a, Unit::ampere), q(b.vceo_v, Unit::volt), gains, q(b.pd_w, Unit::watt), b.package}});
+        out.push_back({g_bipolar,
+                       kind,
+                       b.id,
+                       io::to_json(b),
+                       {b.id, kind, q(b.ic_max_a, Unit::ampere), q(b.vceo_v, Unit::volt), gains, q(b.pd_w, Unit::watt),
+                        b.package}});
     }
     for (const auto& m : cat.mosfets) {
         std::string rds;
-        for (const auto& r : m.rds_on) rds += (rds.empty() ? "" : ", ") + q(r.max_ohm, Unit::ohm) + " at " + q(r.vgs_v, Unit::volt);
-        out.push_back({g_mosfet, "nmos", m.id, io::to_json(m),
+        for (const auto& r : m.rds_on)
+            rds += (rds.empty() ? "" : ", ") + q(r.max_ohm, Unit::ohm) + " at " + q(r.vgs_v, Unit::volt);
+        out.push_back({g_mosfet,
+                       "nmos",
+                       m.id,
+                       io::to_json(m),
                        {m.id, q(m.id_max_a, Unit::ampere), q(m.vds_max_v, Unit::volt),
-                        q(m.vgs_th_min_v, Unit::volt) + " to " + q(m.vgs_th_max_v, Unit::volt), rds, q(m.pd_w, Unit::watt), m.package}});
+                        q(m.vgs_th_min_v, Unit::volt) + " to " + q(m.vgs_th_max_v, Unit::volt), rds,
+                        q(m.pd_w, Unit::watt), m.package}});
     }
     for (const auto& a : cat.arrays) {
-        out.push_back({g_array, "array", a.id, io::to_json(a),
+        out.push_back({g_array,
+                       "array",
+                       a.id,
+                       io::to_json(a),
                        {a.id, std::to_string(a.channels), q(a.ic_max_a, Unit::ampere), q(a.vceo_v, Unit::volt),
                         q(a.input_resistor_ohm, Unit::ohm), q(a.pd_w, Unit::watt), a.package}});
     }
@@ -99,19 +112,31 @@ std::vector<Entry> transistor_entries(const Catalogue& cat) {
 std::vector<Entry> clamp_entries(const Catalogue& cat) {
     std::vector<Entry> out;
     for (const auto& d : cat.diodes) {
-        const std::string peak = d.ifrm_a ? q(*d.ifrm_a, Unit::ampere) + " rep." : d.ifsm_a ? q(*d.ifsm_a, Unit::ampere) + " surge" : "-";
+        const std::string peak = d.ifrm_a   ? q(*d.ifrm_a, Unit::ampere) + " rep."
+                                 : d.ifsm_a ? q(*d.ifsm_a, Unit::ampere) + " surge"
+                                            : "-";
         std::string vf;
-        for (const auto& f : d.vf) vf += (vf.empty() ? "" : ", ") + q(f.vf_max_v, Unit::volt) + " at " + q(f.if_a, Unit::ampere);
+        for (const auto& f : d.vf)
+            vf += (vf.empty() ? "" : ", ") + q(f.vf_max_v, Unit::volt) + " at " + q(f.if_a, Unit::ampere);
         const std::string kind(diode_kind_name(d.kind));
-        out.push_back({g_diode, kind, d.id, io::to_json(d),
+        out.push_back({g_diode,
+                       kind,
+                       d.id,
+                       io::to_json(d),
                        {d.id, kind, q(d.vrrm_v, Unit::volt), q(d.if_avg_a, Unit::ampere), peak, vf}});
     }
     for (const auto& z : cat.zeners) {
-        out.push_back({g_zener, "zener", z.id, io::to_json(z),
+        out.push_back({g_zener,
+                       "zener",
+                       z.id,
+                       io::to_json(z),
                        {z.id, q(z.vz_v, Unit::volt), q(z.tolerance, Unit::ratio), q(z.pd_w, Unit::watt), z.package}});
     }
     for (const auto& t : cat.tvs) {
-        out.push_back({g_tvs, "tvs", t.id, io::to_json(t),
+        out.push_back({g_tvs,
+                       "tvs",
+                       t.id,
+                       io::to_json(t),
                        {t.id, q(t.vrwm_v, Unit::volt), q(t.vbr_min_v, Unit::volt) + " to " + q(t.vbr_max_v, Unit::volt),
                         q(t.vc_v, Unit::volt) + " at " + q(t.ipp_a, Unit::ampere), q(t.ppk_w, Unit::watt), t.package}});
     }
@@ -125,7 +150,11 @@ std::vector<Entry> all_entries(const io::PartsTable& table) {
         io::Json pj = {{"id", p.id}, {"kind", p.kind}, {"description", p.description}};
         for (const auto& [k, v] : p.fields.items()) pj[k] = v;
         pj["source"] = p.source;
-        out.push_back({g_preset, p.kind, p.id, pj, {p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")}});
+        out.push_back({g_preset,
+                       p.kind,
+                       p.id,
+                       pj,
+                       {p.id, p.kind, p.description.substr(0, 70) + (p.description.size() > 70 ? "..." : "")}});
     }
     // Relay and contactor records (cli/parts_relays.cpp): one row each, its kind in the second cell.
     io::Json relays = io::Json::array();
@@ -142,11 +171,25 @@ std::vector<Entry> all_entries(const io::PartsTable& table) {
 // (transistor, diode, preset) and "mosfet". Empty when the word is not one.
 std::string kind_word(const std::string& word) {
     std::string w = fold_case(word);
-    static const std::vector<std::pair<std::string, std::string>> words{
-        {"transistor", "transistor"}, {"npn", "npn"}, {"darlington", "darlington"}, {"nmos", "nmos"}, {"mosfet", "nmos"},
-        {"array", "array"}, {"diode", "diode"}, {"rectifier", "rectifier"}, {"fast", "fast"}, {"signal", "signal"},
-        {"schottky", "schottky"}, {"schottkie", "schottky"}, {"zener", "zener"}, {"tvs", "tvs"}, {"coil", "coil"}, {"pin", "pin"},
-        {"preset", "preset"}, {"relay", "relay"}, {"contactor", "contactor"}};
+    static const std::vector<std::pair<std::string, std::string>> words{{"transistor", "transistor"},
+                                                                        {"npn", "npn"},
+                                                                        {"darlington", "darlington"},
+                                                                        {"nmos", "nmos"},
+                                                                        {"mosfet", "nmos"},
+                                                                        {"array", "array"},
+                                                                        {"diode", "diode"},
+                                                                        {"rectifier", "rectifier"},
+                                                                        {"fast", "fast"},
+                                                                        {"signal", "signal"},
+                                                                        {"schottky", "schottky"},
+                                                                        {"schottkie", "schottky"},
+                                                                        {"zener", "zener"},
+                                                                        {"tvs", "tvs"},
+                                                                        {"coil", "coil"},
+                                                                        {"pin", "pin"},
+                                                                        {"preset", "preset"},
+                                                                        {"relay", "relay"},
+                                                                        {"contactor", "contactor"}};
     for (const auto& [name, kind] : words) {
         if (w == name || w == name + "s" || w == name + "es") return kind;
     }
@@ -162,7 +205,8 @@ bool kind_matches(const Entry& e, const std::string& kind) {
 }
 
 constexpr const char* kind_list =
-    "transistor, npn, darlington, nmos (mosfet), array, diode, rectifier, fast, signal, schottky, zener, tvs, coil, pin, preset, "
+    "transistor, npn, darlington, nmos (mosfet), array, diode, rectifier, fast, signal, schottky, zener, tvs, coil, "
+    "pin, preset, "
     "relay or contactor";
 
 }  // namespace
@@ -176,7 +220,9 @@ std::string listing_text(const std::vector<const Entry*>& shown, const io::Parts
         for (const Entry* e : shown) {
             if (e->group == g) rows.push_back(e->row);
         }
-        if (rows.size() > 1) text += fmt::format("{} ({})\n", group_info(static_cast<Group>(g)).title, rows.size() - 1) + table_text(rows) + "\n";
+        if (rows.size() > 1)
+            text += fmt::format("{} ({})\n", group_info(static_cast<Group>(g)).title, rows.size() - 1) +
+                    table_text(rows) + "\n";
     }
     text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n";
     text += "Read from: ";
@@ -192,7 +238,8 @@ int run_parts(const PartsOptions& options) {
     std::string kind = options.kind.empty() ? std::string() : kind_word(options.kind);
     std::string id = options.id;
     if (!options.kind.empty() && kind.empty()) {
-        if (!id.empty()) throw InputError("parts: unknown kind \"" + io::printable(options.kind) + "\"; expected " + kind_list);
+        if (!id.empty())
+            throw InputError("parts: unknown kind \"" + io::printable(options.kind) + "\"; expected " + kind_list);
         id = options.kind;  // `coilfit parts 2N4401`
     }
     std::vector<const Entry*> shown;
@@ -205,11 +252,12 @@ int run_parts(const PartsOptions& options) {
         for (const Entry* e : shown) ids.push_back(e->id);
         const IdMatch m = match_id(id, ids);
         if (!m.id) {
-            const std::string what = m.ambiguous.empty()
-                                         ? fmt::format("no part or preset \"{}\" in the table; nearest: {}", io::printable(id),
-                                                       fmt::join(nearest_ids(id, ids), ", "))
-                                         : fmt::format("\"{}\" names {} parts that differ only in case: {}; give the id exactly",
-                                                       io::printable(id), m.ambiguous.size(), fmt::join(m.ambiguous, ", "));
+            const std::string what =
+                m.ambiguous.empty()
+                    ? fmt::format("no part or preset \"{}\" in the table; nearest: {}", io::printable(id),
+                                  fmt::join(nearest_ids(id, ids), ", "))
+                    : fmt::format("\"{}\" names {} parts that differ only in case: {}; give the id exactly",
+                                  io::printable(id), m.ambiguous.size(), fmt::join(m.ambiguous, ", "));
             throw InputError("parts: " + what);
         }
         std::erase_if(shown, [&](const Entry* e) { return e->id != *m.id; });
@@ -231,8 +279,10 @@ int run_parts(const PartsOptions& options) {
     if (!id.empty()) {
         std::string text;
         for (const Entry* e : shown) text += io::part_text(e->json, text_width());
-        text += "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n"
-                "The record as the parts table writes it: coilfit parts " + shown.front()->id + " --format json\n";
+        text +=
+            "Values are typical datasheet limits from memory; confirm against the datasheet of the part in use.\n"
+            "The record as the parts table writes it: coilfit parts " +
+            shown.front()->id + " --format json\n";
         emit(text, "");
         return exit_pass;
     }

@@ -41,18 +41,26 @@ std::array<std::string, 7> row_cells(std::size_t rank, const Candidate& c, bool 
     // An array channel clamps through its own diode to the common pin.
     std::string diode = c.driver == "array" ? std::string("built in") : c.diode.empty() ? std::string("-") : c.diode;
     if (!all_clamps && c.driver != "array" && c.clamps_tried > 1) diode += fmt::format(" (best of {})", c.clamps_tried);
-    return {rank ? std::to_string(rank) : std::string(), c.transistor, diode,
-            c.driver == "array" ? "built in" : c.resistor_ohm ? format_quantity(*c.resistor_ohm, Unit::ohm) : "none", c.worst_check,
-            margin_words(c.worst_margin), c.verdict == Verdict::pass ? "pass" : "FAIL"};
+    return {rank ? std::to_string(rank) : std::string(),
+            c.transistor,
+            diode,
+            c.driver == "array" ? "built in"
+            : c.resistor_ohm    ? format_quantity(*c.resistor_ohm, Unit::ohm)
+                                : "none",
+            c.worst_check,
+            margin_words(c.worst_margin),
+            c.verdict == Verdict::pass ? "pass" : "FAIL"};
 }
 
-const std::array<std::string, 7> header{"#", "transistor", "clamp diode", "resistor", "worst check", "margin", "verdict"};
+const std::array<std::string, 7> header{"#",           "transistor", "clamp diode", "resistor",
+                                        "worst check", "margin",     "verdict"};
 
 // The rows as a table fitted to the width: aligned columns, or each row on two lines when narrow.
 // Streamed rows come in batches: `at_least` keeps the columns of every batch aligned and
 // `with_header` prints the header with the first only.
 std::string table_text(const std::vector<std::array<std::string, 7>>& rows, const std::vector<Verdict>& verdicts,
-                       const io::TextStyle& style, const std::array<std::size_t, 7>& at_least = {}, bool with_header = true) {
+                       const io::TextStyle& style, const std::array<std::size_t, 7>& at_least = {},
+                       bool with_header = true) {
     std::array<std::size_t, 7> w = at_least;
     for (std::size_t k = 0; k < 7; ++k) w[k] = std::max(w[k], io::display_width(header[k]));
     for (const auto& r : rows)
@@ -63,8 +71,8 @@ std::string table_text(const std::vector<std::array<std::string, 7>>& rows, cons
     if (total > style.width) {
         for (std::size_t i = 0; i < rows.size(); ++i) {
             const auto& r = rows[i];
-            out += fmt::format("  {}{} {}\n    {}, {}, worst {} {}\n", r[0].empty() ? "" : r[0] + ". ", r[1], io::paint(r[6], verdicts[i], style),
-                               r[2], r[3], r[4], r[5]);
+            out += fmt::format("  {}{} {}\n    {}, {}, worst {} {}\n", r[0].empty() ? "" : r[0] + ". ", r[1],
+                               io::paint(r[6], verdicts[i], style), r[2], r[3], r[4], r[5]);
         }
         return out;
     }
@@ -88,20 +96,24 @@ std::string footer(const PickResult& result, const PickOptions& options) {
         text += "\nNothing passes:\n";
         for (const auto& r : result.reasons) text += "  - " + io::wrap(r, text_width(), 4) + "\n";
     }
-    std::string words = options.all_clamps ? "Each transistor with each diode of the table"
-                                           : "One row per transistor with its best clamp diode (--all-clamps lists every pair)";
-    words += (options.all_clamps && options.top == 0) ? "; each transistor's pairs ranked among themselves."
-                                                      : "; ranked by robustness, then the smallest margin over all checks.";
+    std::string words = options.all_clamps
+                            ? "Each transistor with each diode of the table"
+                            : "One row per transistor with its best clamp diode (--all-clamps lists every pair)";
+    words += (options.all_clamps && options.top == 0)
+                 ? "; each transistor's pairs ranked among themselves."
+                 : "; ranked by robustness, then the smallest margin over all checks.";
     const std::size_t width = text_width();
-    text += "\n" + io::wrap(words, width, 0) + "\n" + io::wrap("Size one with `coilfit size SPEC --transistor ID --diode ID`.", width, 0) +
-            "\n" + io::wrap("Values are typical datasheet limits from memory; confirm against the datasheets in use.", width, 0) + "\n";
+    text +=
+        "\n" + io::wrap(words, width, 0) + "\n" +
+        io::wrap("Size one with `coilfit size SPEC --transistor ID --diode ID`.", width, 0) + "\n" +
+        io::wrap("Values are typical datasheet limits from memory; confirm against the datasheets in use.", width, 0) +
+        "\n";
     return text;
 }
 
 std::string title(const Spec& spec) { return spec.name.empty() ? std::string("unnamed channel") : spec.name; }
 
 }  // namespace
-
 
 namespace {
 
@@ -111,8 +123,10 @@ struct Output {
     io::RunInputs inputs;
     std::string buffer;
     void put(const std::string& text) {
-        if (path.empty()) emit(text, "");
-        else buffer += text;
+        if (path.empty())
+            emit(text, "");
+        else
+            buffer += text;
     }
     void finish() const {
         if (!path.empty()) emit(buffer, path, inputs);
@@ -129,12 +143,14 @@ io::Json head_json(const Spec& spec, const PickSettings& settings) {
 }
 
 std::string summary_words(const PickResult& result, const PickSettings& settings) {
-    const std::string what = settings.all_clamps ? "transistor and diode pairs" : "transistors (each with its best clamp diode)";
+    const std::string what =
+        settings.all_clamps ? "transistor and diode pairs" : "transistors (each with its best clamp diode)";
     return fmt::format("{} of {} {} pass at worst case", result.passing, result.rows, what);
 }
 
 // Ranked rows (one per transistor, or the best --top N), printed once they are all known.
-std::string ranked_text(const Spec& spec, const PickResult& result, const PickOptions& options, const io::TextStyle& style) {
+std::string ranked_text(const Spec& spec, const PickResult& result, const PickOptions& options,
+                        const io::TextStyle& style) {
     std::vector<std::array<std::string, 7>> rows;
     std::vector<Verdict> verdicts;
     for (const Candidate& c : result.candidates) {
@@ -143,15 +159,18 @@ std::string ranked_text(const Spec& spec, const PickResult& result, const PickOp
     }
     PickSettings settings;
     settings.all_clamps = options.all_clamps;
-    std::string text = io::wrap(fmt::format("coilfit pick - {}: {}", title(spec), summary_words(result, settings)), style.width, 2) + "\n\n";
+    std::string text =
+        io::wrap(fmt::format("coilfit pick - {}: {}", title(spec), summary_words(result, settings)), style.width, 2) +
+        "\n\n";
     text += table_text(rows, verdicts, style);
-    if (result.candidates.size() < result.rows) text += fmt::format("  ... {} more (--top 0 lists all)\n", result.rows - result.candidates.size());
+    if (result.candidates.size() < result.rows)
+        text += fmt::format("  ... {} more (--top 0 lists all)\n", result.rows - result.candidates.size());
     return text + footer(result, options);
 }
 
 // Every pair of the table, written as the rows are made (JSON too): nothing is kept.
-PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickSettings& settings, const PickOptions& options,
-                      const io::TextStyle& style, Output& out) {
+PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickSettings& settings,
+                      const PickOptions& options, const io::TextStyle& style, Output& out) {
     const bool json = options.common.format == "json";
     // Fixed columns for the batches: the longest ids of the table.
     std::array<std::size_t, 7> widths{0, 10, 11, 8, 21, 7, 7};
@@ -172,12 +191,14 @@ PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickS
         const std::string head = head_json(spec, settings).dump(2);
         out.put(head.substr(0, head.size() - 2) + ",\n  \"candidates\": [");
     } else {
-        out.put(io::wrap(fmt::format("coilfit pick - {}: every pair, in table order", title(spec)), style.width, 2) + "\n\n");
+        out.put(io::wrap(fmt::format("coilfit pick - {}: every pair, in table order", title(spec)), style.width, 2) +
+                "\n\n");
     }
     PickResult result = pick_each(spec, table.catalogue, settings, [&](const Candidate& c) {
         if (json) {
             std::string item = candidate_json(c, true).dump(2);
-            for (std::size_t at = item.find('\n'); at != std::string::npos; at = item.find('\n', at + 1)) item.insert(at + 1, "    ");
+            for (std::size_t at = item.find('\n'); at != std::string::npos; at = item.find('\n', at + 1))
+                item.insert(at + 1, "    ");
             out.put(std::string(first ? "\n    " : ",\n    ") + item);
             first = false;
             return;
@@ -187,7 +208,8 @@ PickResult run_stream(const Spec& spec, const io::PartsTable& table, const PickS
         if (rows.size() == 64) flush();  // a batch at a time
     });
     if (json) {
-        const std::string tail = io::Json{{"rows", result.rows}, {"passing", result.passing}, {"reasons", result.reasons}}.dump(2);
+        const std::string tail =
+            io::Json{{"rows", result.rows}, {"passing", result.passing}, {"reasons", result.reasons}}.dump(2);
         out.put(std::string(first ? "]," : "\n  ],") + tail.substr(1) + "\n");
     } else {
         flush();

@@ -4,8 +4,8 @@
 
 #include <algorithm>
 #include <chrono>
-#include <cstdint>
 #include <cmath>
+#include <cstdint>
 #include <cstdio>
 #include <thread>
 
@@ -44,12 +44,14 @@ std::string percent(double rate) {
 
 bool has_typical_gain(const Transistor& t) {
     const auto* part = std::get_if<Bipolar>(&t);
-    return part && std::any_of(part->hfe_min.begin(), part->hfe_min.end(), [](const GainPoint& p) { return p.hfe_typ.has_value(); });
+    return part && std::any_of(part->hfe_min.begin(), part->hfe_min.end(),
+                               [](const GainPoint& p) { return p.hfe_typ.has_value(); });
 }
 
 bool has_typical_rds(const Transistor& t) {
     const auto* part = std::get_if<Mosfet>(&t);
-    return part && std::any_of(part->rds_on.begin(), part->rds_on.end(), [](const RdsOnPoint& p) { return p.typ_ohm.has_value(); });
+    return part && std::any_of(part->rds_on.begin(), part->rds_on.end(),
+                               [](const RdsOnPoint& p) { return p.typ_ohm.has_value(); });
 }
 
 // The inputs that vary in this spec, in words.
@@ -68,7 +70,8 @@ std::vector<std::string> varied_inputs(const Spec& spec, ConditionsMode mode) {
     }
     if (has_typical_gain(spec.transistor)) v.emplace_back("transistor.hfe");
     if (has_typical_rds(spec.transistor)) v.emplace_back("transistor.rds_on");
-    if (spec.clamp.type == ClampType::diode_resistor && spec.clamp.resistor_tolerance > 0) v.emplace_back("clamp.resistor");
+    if (spec.clamp.type == ClampType::diode_resistor && spec.clamp.resistor_tolerance > 0)
+        v.emplace_back("clamp.resistor");
     return v;
 }
 
@@ -95,7 +98,8 @@ std::string design_line(const Spec& spec, const YieldResult& r) {
             s += format_quantity(*r.design.r_drive_ohm, Unit::ohm);
             const ESeries series = bipolar ? spec.base_resistor.series : spec.gate_resistor.series;
             s += r.design.resistor_fixed ? " (fixed" : fmt::format(" ({}", eseries_name(series));
-            s += fmt::format(", {} %)", (bipolar ? spec.base_resistor.tolerance : spec.gate_resistor.tolerance) * 100.0);
+            s +=
+                fmt::format(", {} %)", (bipolar ? spec.base_resistor.tolerance : spec.gate_resistor.tolerance) * 100.0);
         } else {
             s += "none (no value of the series works)";
         }
@@ -110,7 +114,8 @@ std::string design_line(const Spec& spec, const YieldResult& r) {
 std::string render_text(const Spec& spec, const YieldResult& r, const io::TextStyle& style, std::size_t width) {
     const YieldSettings& st = r.settings;
     const bool worst_pass = r.design.worst.passes();
-    std::string t = fmt::format("coilfit yield - {}\n\n", spec.name.empty() ? std::string("unnamed channel") : spec.name);
+    std::string t =
+        fmt::format("coilfit yield - {}\n\n", spec.name.empty() ? std::string("unnamed channel") : spec.name);
     auto row = [&t](std::string_view label, const std::string& value) {
         t += "  " + io::pad_right(label, 12) + value + "\n";
     };
@@ -119,16 +124,22 @@ std::string render_text(const Spec& spec, const YieldResult& r, const io::TextSt
                           (worst_pass ? " (every check at its worst corner)" : " (see coilfit size)"));
     row("samples", fmt::format("{}, {} within the tolerances, seed {}", grouped(st.samples),
                                distribution_name(st.distribution), st.seed));
-    row("conditions", st.conditions == ConditionsMode::worst
-                          ? std::string("supply, ambient and pin VDD held at each check's worst corner; part spreads drawn")
-                          : std::string("supply, ambient and pin VDD drawn with the part spreads (--conditions sampled)"));
+    row("conditions",
+        st.conditions == ConditionsMode::worst
+            ? std::string("supply, ambient and pin VDD held at each check's worst corner; part spreads drawn")
+            : std::string("supply, ambient and pin VDD drawn with the part spreads (--conditions sampled)"));
     const Verdict overall = r.passed == st.samples ? Verdict::pass : Verdict::fail;
-    row("pass rate", io::paint(percent(r.pass_rate), overall, style) +
-                         fmt::format("  (95 % interval {} to {}, Wilson score)", percent(r.interval.lo), percent(r.interval.hi)));
+    row("pass rate",
+        io::paint(percent(r.pass_rate), overall, style) +
+            fmt::format("  (95 % interval {} to {}, Wilson score)", percent(r.interval.lo), percent(r.interval.hi)));
     row("failed", fmt::format("{} of {} samples", grouped(st.samples - r.passed), grouped(st.samples)));
     if (!worst_pass && r.passed > 0) {
-        t += "  " + io::wrap("The design fails at worst case, yet most parts beat their datasheet limits: this share of units "
-                             "works, but no unit is guaranteed to.", width - 2, 2) + "\n";
+        t += "  " +
+             io::wrap(
+                 "The design fails at worst case, yet most parts beat their datasheet limits: this share of units "
+                 "works, but no unit is guaranteed to.",
+                 width - 2, 2) +
+             "\n";
     }
     t += "\n";
 
@@ -149,8 +160,8 @@ std::string render_text(const Spec& spec, const YieldResult& r, const io::TextSt
     if (r.most_frequent_failure) {
         const auto it = std::find_if(r.checks.begin(), r.checks.end(),
                                      [&r](const CheckYield& c) { return c.id == *r.most_frequent_failure; });
-        t += fmt::format("  Most frequent failure: {}, in {} of {} samples.\n\n", check_id_name(*r.most_frequent_failure),
-                         grouped(it->failed), grouped(it->evaluated));
+        t += fmt::format("  Most frequent failure: {}, in {} of {} samples.\n\n",
+                         check_id_name(*r.most_frequent_failure), grouped(it->failed), grouped(it->evaluated));
     } else {
         t += "  No sample failed a check.\n\n";
     }
@@ -161,16 +172,16 @@ std::string render_text(const Spec& spec, const YieldResult& r, const io::TextSt
         varied_list += i == 0 ? "" : i + 1 == varied.size() ? " and " : ", ";
         varied_list += input_words(varied[i]);
     }
-    std::string note = varied.empty()
-                           ? std::string("No input has a tolerance here: every sample is the same point.")
-                           : "Each sample draws " + varied_list + " within their bands" +
-                                 (st.distribution == Distribution::normal
-                                      ? " (normal, the band's half-width at 3 sigma, truncated at the band)"
-                                      : " (uniform)") +
-                                 ".";
-    note += " Vce(sat), Vbe(sat) and diode drops stay at their datasheet limits, as in the worst case; the design "
-            "(parts and base resistor) is the one coilfit size gives. A rate is an estimate from samples: "
-            "the interval says how far the true rate may lie.";
+    std::string note = varied.empty() ? std::string("No input has a tolerance here: every sample is the same point.")
+                                      : "Each sample draws " + varied_list + " within their bands" +
+                                            (st.distribution == Distribution::normal
+                                                 ? " (normal, the band's half-width at 3 sigma, truncated at the band)"
+                                                 : " (uniform)") +
+                                            ".";
+    note +=
+        " Vce(sat), Vbe(sat) and diode drops stay at their datasheet limits, as in the worst case; the design "
+        "(parts and base resistor) is the one coilfit size gives. A rate is an estimate from samples: "
+        "the interval says how far the true rate may lie.";
     t += "  " + io::wrap(note, width - 2, 2) + "\n";
     return t;
 }
@@ -196,12 +207,16 @@ io::Json render_json(const Spec& spec, const YieldResult& r) {
         r.design.r_drive_ohm ? io::Json(*r.design.r_drive_ohm) : io::Json(nullptr);
     design["clamp"] = clamp_type_name(spec.clamp.type);
     design["diode"] = spec.clamp.diode ? io::Json(display_id(*spec.clamp.diode)) : io::Json(nullptr);
-    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener ? io::Json(display_id(*spec.clamp.zener))
-                                                                                   : io::Json(nullptr);
+    design["zener"] = spec.clamp.zener && spec.clamp.type == ClampType::diode_zener
+                          ? io::Json(display_id(*spec.clamp.zener))
+                          : io::Json(nullptr);
     j["design"] = design;
     io::Json checks = io::Json::array();
     for (const CheckYield& c : r.checks) {
-        checks.push_back({{"id", check_id_name(c.id)}, {"pass_rate", c.pass_rate}, {"failed", c.failed}, {"evaluated", c.evaluated}});
+        checks.push_back({{"id", check_id_name(c.id)},
+                          {"pass_rate", c.pass_rate},
+                          {"failed", c.failed},
+                          {"evaluated", c.evaluated}});
     }
     j["checks"] = checks;
     j["most_frequent_failure"] =
@@ -263,7 +278,8 @@ int run_yield(const YieldOptions& options) {
     YieldResult result;
     {
         Progress progress;
-        result = run_yield(spec, settings, [&progress](std::uint64_t done, std::uint64_t total) { progress(done, total); });
+        result =
+            run_yield(spec, settings, [&progress](std::uint64_t done, std::uint64_t total) { progress(done, total); });
     }
 
     std::string text;

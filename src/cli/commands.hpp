@@ -29,7 +29,7 @@ int run_parts(const PartsOptions& options);
 struct PickOptions {
     SpecOptions spec;
     CommonOptions common;
-    std::size_t top = 0;  // 0: all
+    std::size_t top = 0;      // 0: all
     bool all_clamps = false;  // --all-clamps: every transistor and diode pair
 };
 int run_pick(const PickOptions& options);
@@ -41,7 +41,7 @@ struct YieldOptions {
     std::uint64_t seed = 1;
     std::string distribution = "uniform";
     std::string conditions = "worst";  // worst | sampled
-    unsigned jobs = 0;  // 0: all cores
+    unsigned jobs = 0;                 // 0: all cores
 };
 int run_yield(const YieldOptions& options);
 

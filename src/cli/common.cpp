@@ -15,9 +15,11 @@
 namespace coilfit::cli {
 
 io::SpecDocument build_spec_document(const SpecOptions& options) {
-    io::SpecDocument d = options.spec_path.empty() ? io::flags_only_document() : io::load_spec_document(options.spec_path);
+    io::SpecDocument d =
+        options.spec_path.empty() ? io::flags_only_document() : io::load_spec_document(options.spec_path);
     if (options.spec_path.empty() && options.values.empty()) {
-        throw InputError("no spec: give a spec file (or - for standard input), or the spec fields as flags (see --help)");
+        throw InputError(
+            "no spec: give a spec file (or - for standard input), or the spec fields as flags (see --help)");
     }
     for (const SpecFlag& f : spec_flags()) d.origin.flag_names.emplace(f.path, f.flag);
     for (std::size_t i = 0; i < options.values.size(); ++i) {
@@ -39,11 +41,13 @@ io::RunInputs run_inputs(const SpecOptions& spec, const io::PartsTable& table) {
 
 void check_outputs(const std::string& output_path, const std::string& netlist_path, const io::RunInputs& inputs,
                    const std::string& plot_path) {
-    io::check_outputs({{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
-                      inputs);
+    io::check_outputs(
+        {{"--output", output_path.empty() ? "-" : output_path}, {"--netlist", netlist_path}, {"--plot", plot_path}},
+        inputs);
 }
 
-void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs, const std::string& flag) {
+void emit(const std::string& text, const std::string& output_path, const io::RunInputs& inputs,
+          const std::string& flag) {
     std::cout.flush();
     io::write_output({flag, output_path.empty() ? "-" : output_path}, text, inputs);
 }

@@ -19,8 +19,8 @@ inline constexpr int exit_bad_input = 2;
 
 // The spec file and the flags that override its fields (or make up a whole spec).
 struct SpecOptions {
-    std::string spec_path;                            // empty: the spec is given by flags only
-    std::vector<std::pair<std::string, std::string>> values;  // (spec field path, value) in flag order
+    std::string spec_path;                                     // empty: the spec is given by flags only
+    std::vector<std::pair<std::string, std::string>> values;   // (spec field path, value) in flag order
     std::vector<std::pair<std::string, std::string>> flag_of;  // (spec field path, flag name)
     std::vector<std::string> storage;                          // one slot per flag, bound by args.cpp
 };
@@ -28,7 +28,7 @@ struct SpecOptions {
 struct CommonOptions {
     std::string parts_path;  // --parts; else $COILFIT_PARTS; else the installed table
     std::string format = "text";
-    std::string output;      // --output FILE (io/output.hpp); empty: standard output
+    std::string output;  // --output FILE (io/output.hpp); empty: standard output
 };
 
 // The spec document: the file (or "-" for stdin, or nothing) with the flags applied.

@@ -76,8 +76,8 @@ constexpr SpecFlag table[] = {
     {"--load-current", "load.current", "CURRENT", "current the contacts switch, e.g. 2A", ""},
     {"--relay", "relay", "ID", "relay or contactor id from the parts table: fills the coil and the contacts", ""},
     {"--load-type", "load.type", "ac|dc", "ac or dc: what the contacts switch", ""},
-    {"--load-inrush", "load.inrush", "CURRENT|Nx", "the load's inrush, in amperes (48A) or times the steady current (6x)",
-     "by kind"},
+    {"--load-inrush", "load.inrush", "CURRENT|Nx",
+     "the load's inrush, in amperes (48A) or times the steady current (6x)", "by kind"},
     {"--load-power-factor", "load.power_factor", "RATIO", "power factor of an AC load, e.g. 0.8", ""},
     {"--load-time-constant", "load.time_constant", "TIME", "L/R of a DC load, e.g. 20ms", ""},
 };

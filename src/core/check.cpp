@@ -46,15 +46,18 @@ constexpr bool table_in_order() {
 }
 static_assert(table_in_order(), "the check table lists the checks in CheckId order");
 
-
 }  // namespace
 
 std::string_view verdict_name(Verdict verdict) {
     switch (verdict) {
-    case Verdict::pass: return "pass";
-    case Verdict::warn: return "warn";
-    case Verdict::fail: return "fail";
-    case Verdict::skip: return "skip";
+        case Verdict::pass:
+            return "pass";
+        case Verdict::warn:
+            return "warn";
+        case Verdict::fail:
+            return "fail";
+        case Verdict::skip:
+            return "skip";
     }
     return "skip";
 }
@@ -71,6 +74,5 @@ void mark_beyond_data(CheckValue& c) {
     c.beyond_data = true;
     if (c.verdict == Verdict::pass) c.verdict = Verdict::warn;
 }
-
 
 }  // namespace coilfit

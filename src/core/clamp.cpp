@@ -67,25 +67,26 @@ bool set_rate_checks(ClampCorner& k, const Prepared& p, const Conditions& c, con
     checks.set(CheckId::diode_current, avg_stands ? avg : diode_peak);
     CheckValue power;
     switch (spec.clamp.type) {
-    case ClampType::diode_zener:
-        k.zener_power_w = f * k.v.part_peak_v * hot.charge_c;
-        power = at_most(k.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w);
-        break;
-    case ClampType::diode_resistor:
-        k.resistor_power_w = f * k.v.series_ohm * hot.i2_integral;
-        power = at_most(k.resistor_power_w, policy.power_derating * spec.clamp.resistor_power_w);
-        break;
-    case ClampType::diode:
-        // A diode has no power rating of its own here: its dissipation at the rated average
-        // current, if_avg * Vf(if_avg), stands for it.
-        power = at_most(k.clamp_power_w, p.diode_rated_power_w);
-        break;
-    case ClampType::diode_tvs:
-        // The diode's share, f Vf Q, against its rated dissipation; the TVS's pulses are
-        // clamp.pulse's (a TVS record gives no average rating).
-        power = at_most(f * (k.v.peak_v - k.v.part_peak_v) * hot.charge_c, p.diode_rated_power_w);
-        break;
-    case ClampType::none: return true;
+        case ClampType::diode_zener:
+            k.zener_power_w = f * k.v.part_peak_v * hot.charge_c;
+            power = at_most(k.zener_power_w, policy.power_derating * spec.clamp.zener->pd_w);
+            break;
+        case ClampType::diode_resistor:
+            k.resistor_power_w = f * k.v.series_ohm * hot.i2_integral;
+            power = at_most(k.resistor_power_w, policy.power_derating * spec.clamp.resistor_power_w);
+            break;
+        case ClampType::diode:
+            // A diode has no power rating of its own here: its dissipation at the rated average
+            // current, if_avg * Vf(if_avg), stands for it.
+            power = at_most(k.clamp_power_w, p.diode_rated_power_w);
+            break;
+        case ClampType::diode_tvs:
+            // The diode's share, f Vf Q, against its rated dissipation; the TVS's pulses are
+            // clamp.pulse's (a TVS record gives no average rating).
+            power = at_most(f * (k.v.peak_v - k.v.part_peak_v) * hot.charge_c, p.diode_rated_power_w);
+            break;
+        case ClampType::none:
+            return true;
     }
     checks.set(CheckId::clamp_power, power);
     return avg.verdict == Verdict::pass && power.verdict == Verdict::pass;
@@ -113,7 +114,9 @@ bool set_pulse_check(ClampCorner& k, const Spec& spec, double charge_c, CheckSet
         k.pulse_rating_w = pulse_rating_w(points, k.pulse_width_s);
         pulse = at_most(k.pulse_peak_w, spec.policy.pulse_derating * k.pulse_rating_w);
     }
-    pulse.detail = static_cast<std::uint8_t>(points.empty() ? PulseCase::unrated : tvs ? PulseCase::tvs : PulseCase::zener);
+    pulse.detail = static_cast<std::uint8_t>(points.empty() ? PulseCase::unrated
+                                             : tvs          ? PulseCase::tvs
+                                                            : PulseCase::zener);
     checks.set(CheckId::clamp_pulse, pulse);
     return pulse.verdict != Verdict::fail;
 }
@@ -133,7 +136,8 @@ void decay_figures(const Prepared& p, const Conditions& c, double r_coil_cold_oh
     // Energy corner: the highest clamp voltage takes the largest share of the stored energy.
     const double r_loop_slow = r_coil_cold_ohm + k.v.series_timing_ohm;
     const double r_loop_hot = r_coil_cold_ohm + k.v.series_ohm;
-    const double vc_energy = spec.clamp.type == ClampType::diode_resistor ? k.v.peak_v - i0 * k.v.series_ohm : k.v.peak_v;
+    const double vc_energy =
+        spec.clamp.type == ClampType::diode_resistor ? k.v.peak_v - i0 * k.v.series_ohm : k.v.peak_v;
     const CheckValue diode_peak = checks[CheckId::diode_current];
     k.slow_tau_s = l / r_loop_slow;
     k.slow_vc_over_r_a = k.v.timing_v > 0 ? k.v.timing_v / r_loop_slow : 0.0;
@@ -192,8 +196,9 @@ void prepare_clamp(const Spec& spec, Prepared& p) {
     p.diode_rated_power_w = d.if_avg_a * vf_max_at(d, d.if_avg_a).value;
 }
 
-void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double ambient_c, double r_coil_cold_ohm,
-                  double release_current_a, const DriverCommon& driver, bool all, ClampCorner& k, CheckSet& checks) {
+void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double ambient_c,
+                  double r_coil_cold_ohm, double release_current_a, const DriverCommon& driver, bool all,
+                  ClampCorner& k, CheckSet& checks) {
     const Spec& spec = *p.spec;
     k.i0_a = i0_a;
     k.has_timing = false;
@@ -209,8 +214,9 @@ void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln
         k.avalanche_j = 0;
         if (driver.avalanche_j > 0 && spec.coil.inductance_h) {
             k.avalanche_j = avalanche_energy_j(*spec.coil.inductance_h, i0_a, driver.rated_voltage_v, c.vs_hi_v);
-            CheckValue pulse = std::isfinite(k.avalanche_j) ? at_most(k.avalanche_j, spec.policy.power_derating * driver.avalanche_j)
-                                                            : failed_without_value(spec.policy.power_derating * driver.avalanche_j);
+            CheckValue pulse = std::isfinite(k.avalanche_j)
+                                   ? at_most(k.avalanche_j, spec.policy.power_derating * driver.avalanche_j)
+                                   : failed_without_value(spec.policy.power_derating * driver.avalanche_j);
             pulse.detail = static_cast<std::uint8_t>(PulseCase::avalanche);
             checks.set(CheckId::clamp_pulse, pulse);
             k.peak_collector_v = driver.rated_voltage_v;

@@ -50,35 +50,36 @@ inline ClampVoltages voltages(const ClampSpec& clamp, double i0_a, const Conditi
     out.vf_outside = vf.outside;
     const double vf_lo = vf_low(*clamp.diode);
     switch (clamp.type) {
-    case ClampType::diode:
-        out.peak_v = vf.value;
-        out.timing_v = vf_lo;
-        break;
-    case ClampType::diode_zener:
-        out.part_peak_v = zener_peak_v(*clamp.zener, c, i0_a);
-        out.peak_v = out.part_peak_v + vf.value;
-        out.timing_v = zener_timing_v(*clamp.zener, c, i0_a) + vf_lo;
-        break;
-    case ClampType::diode_resistor: {
-        const double rs = clamp.resistor_ohm.value_or(0.0);
-        out.series_ohm = rs * c.rs_hi_factor;
-        out.series_timing_ohm = rs * c.rs_lo_factor;
-        out.peak_v = i0_a * out.series_ohm + vf.value;
-        out.timing_v = vf_lo;
-        break;
-    }
-    case ClampType::diode_tvs: {
-        const Tvs& t = *clamp.tvs;
-        // Vc(I0) linear in current from Vbr max at 1 mA to the clamping voltage at Ipp, the same
-        // line beyond Ipp (src/method.md "TVS clamp"); timing with the lowest breakdown.
-        constexpr double i_br_a = 1e-3;
-        const double slope = t.ipp_a > i_br_a ? (t.vc_v - t.vbr_max_v) / (t.ipp_a - i_br_a) : 0.0;
-        out.part_peak_v = t.vbr_max_v + slope * std::max(0.0, i0_a - i_br_a);
-        out.peak_v = out.part_peak_v + vf.value;
-        out.timing_v = t.vbr_min_v + vf_lo;
-        break;
-    }
-    case ClampType::none: break;
+        case ClampType::diode:
+            out.peak_v = vf.value;
+            out.timing_v = vf_lo;
+            break;
+        case ClampType::diode_zener:
+            out.part_peak_v = zener_peak_v(*clamp.zener, c, i0_a);
+            out.peak_v = out.part_peak_v + vf.value;
+            out.timing_v = zener_timing_v(*clamp.zener, c, i0_a) + vf_lo;
+            break;
+        case ClampType::diode_resistor: {
+            const double rs = clamp.resistor_ohm.value_or(0.0);
+            out.series_ohm = rs * c.rs_hi_factor;
+            out.series_timing_ohm = rs * c.rs_lo_factor;
+            out.peak_v = i0_a * out.series_ohm + vf.value;
+            out.timing_v = vf_lo;
+            break;
+        }
+        case ClampType::diode_tvs: {
+            const Tvs& t = *clamp.tvs;
+            // Vc(I0) linear in current from Vbr max at 1 mA to the clamping voltage at Ipp, the same
+            // line beyond Ipp (src/method.md "TVS clamp"); timing with the lowest breakdown.
+            constexpr double i_br_a = 1e-3;
+            const double slope = t.ipp_a > i_br_a ? (t.vc_v - t.vbr_max_v) / (t.ipp_a - i_br_a) : 0.0;
+            out.part_peak_v = t.vbr_max_v + slope * std::max(0.0, i0_a - i_br_a);
+            out.peak_v = out.part_peak_v + vf.value;
+            out.timing_v = t.vbr_min_v + vf_lo;
+            break;
+        }
+        case ClampType::none:
+            break;
     }
     return out;
 }
@@ -107,8 +108,8 @@ inline Decay decay(double l_h, double r_ohm, double vc_v, double i0_a, double i_
     if (a > 0) {
         // exp(-t/tau) at t = tau ln(1 + I0/a) is exactly a / (I0 + a): no exp needed.
         const double e1 = a / big_a;
-        d.i2_integral = big_a * big_a * d.tau_s / 2.0 * (1.0 - e1 * e1) -
-                        2.0 * big_a * a * d.tau_s * (1.0 - e1) + a * a * t;
+        d.i2_integral =
+            big_a * big_a * d.tau_s / 2.0 * (1.0 - e1 * e1) - 2.0 * big_a * a * d.tau_s * (1.0 - e1) + a * a * t;
     } else {
         d.i2_integral = i0_a * i0_a * d.tau_s / 2.0;
     }

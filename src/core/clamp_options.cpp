@@ -15,7 +15,8 @@ std::string q(double value, Unit unit) { return format_quantity(value, unit); }
 // longer release (the one the report quotes), the voltage at the corner of the higher peak.
 std::optional<TurnOff> turn_off(const Spec& s, const Evaluation& e) {
     if (!s.coil.inductance_h || !e.clamp.at[0].has_timing) return std::nullopt;
-    const std::size_t slow = e.clamp.at[1].has_timing && e.clamp.at[1].release_time_s > e.clamp.at[0].release_time_s ? 1 : 0;
+    const std::size_t slow =
+        e.clamp.at[1].has_timing && e.clamp.at[1].release_time_s > e.clamp.at[0].release_time_s ? 1 : 0;
     const std::size_t peak = e.clamp.at[1].peak_collector_v > e.clamp.at[0].peak_collector_v ? 1 : 0;
     const ClampCorner& ks = e.clamp.at[slow];
     const ClampCorner& kp = e.clamp.at[peak];
@@ -49,7 +50,8 @@ ClampOption option_for(const Spec& spec, const Sized& sized, ClampSpec clamp, st
     // Within rating: the collector within its derated rating and the clamp part's pulse (and
     // every other clamp check) passing; a failing option names its check.
     o.within_rating = true;
-    for (const CheckId id : {CheckId::transistor_voltage, CheckId::clamp_pulse, CheckId::diode_current, CheckId::clamp_power}) {
+    for (const CheckId id :
+         {CheckId::transistor_voltage, CheckId::clamp_pulse, CheckId::diode_current, CheckId::clamp_power}) {
         if (e.check(id).verdict == Verdict::fail) {
             o.within_rating = false;
             o.failed_check = std::string(check_id_name(id));
@@ -71,10 +73,11 @@ std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalo
     ClampSpec plain;
     plain.type = ClampType::diode;
     plain.diode = spec.clamp.diode;
-    out.push_back(option_for(spec, sized, plain, "diode " + display_id(*spec.clamp.diode), spec.clamp.type == ClampType::diode));
+    out.push_back(
+        option_for(spec, sized, plain, "diode " + display_id(*spec.clamp.diode), spec.clamp.type == ClampType::diode));
     if (spec.clamp.type == ClampType::diode_resistor) {
-        out.push_back(option_for(spec, sized, spec.clamp, "diode + " + q(spec.clamp.resistor_ohm.value_or(0), Unit::ohm) + " resistor",
-                                 true));
+        out.push_back(option_for(spec, sized, spec.clamp,
+                                 "diode + " + q(spec.clamp.resistor_ohm.value_or(0), Unit::ohm) + " resistor", true));
     }
     // The highest zeners of the table that keep the collector within the derated rating.
     const double i0 = sized.worst.coil_current_max_a();
@@ -98,7 +101,8 @@ std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalo
     std::vector<const Zener*> shown;
     for (const Zener* z : fitting) {
         if (shown.size() >= 3) break;
-        if (std::none_of(shown.begin(), shown.end(), [&](const Zener* s) { return std::abs(s->vz_v - z->vz_v) < 1e-9; })) {
+        if (std::none_of(shown.begin(), shown.end(),
+                         [&](const Zener* s) { return std::abs(s->vz_v - z->vz_v) < 1e-9; })) {
             shown.push_back(z);
         }
     }
@@ -112,12 +116,14 @@ std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalo
         zc.zener = *z;
         const bool chosen = spec_zener && spec.clamp.zener->id == z->id && !spec.clamp.zener->inline_record;
         spec_zener_shown = spec_zener_shown || chosen;
-        out.push_back(option_for(spec, sized, zc, "diode + zener " + z->id + " (" + q(z->vz_v, Unit::volt) + ")", chosen));
+        out.push_back(
+            option_for(spec, sized, zc, "diode + zener " + z->id + " (" + q(z->vz_v, Unit::volt) + ")", chosen));
     }
     if (spec_zener && !spec_zener_shown) {
-        out.push_back(option_for(spec, sized, spec.clamp,
-                                 "diode + zener " + display_id(*spec.clamp.zener) + " (" + q(spec.clamp.zener->vz_v, Unit::volt) + ")",
-                                 true));
+        out.push_back(option_for(
+            spec, sized, spec.clamp,
+            "diode + zener " + display_id(*spec.clamp.zener) + " (" + q(spec.clamp.zener->vz_v, Unit::volt) + ")",
+            true));
     }
     return out;
 }

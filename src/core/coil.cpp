@@ -47,7 +47,8 @@ void coil_corner(const CoilSpec& coil, const Conditions& c, double ambient_c, Co
     k.current_max_a = c.vs_hi_v / k.r_cold_ohm;
     if (coil.thermal_resistance_k_per_w) {
         // A hot restart: the coil has been running at the highest supply, low tolerance.
-        k.rise_k = coil_rise_k(c.vs_hi_v, c.r_coil_lo_ohm, coil.reference_temp_c, ambient_c, *coil.thermal_resistance_k_per_w);
+        k.rise_k =
+            coil_rise_k(c.vs_hi_v, c.r_coil_lo_ohm, coil.reference_temp_c, ambient_c, *coil.thermal_resistance_k_per_w);
     } else {
         k.rise_k = coil.self_heating_k.value_or(defaults::self_heating_k);
     }
@@ -87,45 +88,53 @@ std::string coil_message(CheckId id, const CheckValue& c, const Spec& spec, cons
     const CoilCorner& k = e.coil.at[static_cast<std::size_t>(c.corner)];
     const DriverCorner& d = e.driver.at[static_cast<std::size_t>(c.corner)];
     switch (id) {
-    case CheckId::coil_operate:
-        if (ok) {
-            return "the coil gets at least " + q(c.value, Unit::volt) + " at the lowest supply; hot (" +
-                   q(k.temp_hot_c, Unit::celsius) + ") it needs " + q(c.limit, Unit::volt) + " to operate";
-        }
-        if (c.value <= 0) {
-            return std::string(e.driver.drop_name) + " " + q(d.on_drop_v, Unit::volt) + " takes the whole lowest supply " +
-                   q(e.conditions.vs_lo_v, Unit::volt) + ", so the coil gets no voltage but needs " + q(c.limit, Unit::volt) +
-                   " to operate when hot: the supply is far too low for this coil and transistor";
-        }
-        return "the coil gets only " + q(c.value, Unit::volt) + " at the lowest supply but needs " + q(c.limit, Unit::volt) +
-               " to operate when hot (" + q(k.temp_hot_c, Unit::celsius) +
-               "): it may not pull in; raise or tighten the supply, lower the ambient, or use a coil rated for a lower voltage";
-    case CheckId::coil_overvoltage:
-        return "the coil sees up to " + q(c.value, Unit::volt) + " against its maximum " + q(c.limit, Unit::volt) +
-               (ok ? std::string() : std::string(": tighten the supply or use a coil rated for it"));
-    case CheckId::coil_thermal:
-        if (!c.has_value) {
-            return "the winding's own heat has no stable temperature below " + q(coil_runaway_c, Unit::celsius) +
-                   " at the highest supply (thermal resistance " +
-                   q(spec.coil.thermal_resistance_k_per_w.value_or(0), Unit::kelvin_per_watt) +
-                   "): the coil is overdriven; lower the supply or use a coil rated for it";
-        }
-        return "the winding reaches " + q(c.value, Unit::celsius) + " (" + q(k.ambient_c, Unit::celsius) + " ambient + " +
-               q(k.rise_k, Unit::kelvin) + " rise) against its insulation limit " + q(c.limit, Unit::celsius) +
-               (ok ? std::string() : std::string(": lower the supply, improve cooling, or use a coil with a higher class"));
-    default: return {};
+        case CheckId::coil_operate:
+            if (ok) {
+                return "the coil gets at least " + q(c.value, Unit::volt) + " at the lowest supply; hot (" +
+                       q(k.temp_hot_c, Unit::celsius) + ") it needs " + q(c.limit, Unit::volt) + " to operate";
+            }
+            if (c.value <= 0) {
+                return std::string(e.driver.drop_name) + " " + q(d.on_drop_v, Unit::volt) +
+                       " takes the whole lowest supply " + q(e.conditions.vs_lo_v, Unit::volt) +
+                       ", so the coil gets no voltage but needs " + q(c.limit, Unit::volt) +
+                       " to operate when hot: the supply is far too low for this coil and transistor";
+            }
+            return "the coil gets only " + q(c.value, Unit::volt) + " at the lowest supply but needs " +
+                   q(c.limit, Unit::volt) + " to operate when hot (" + q(k.temp_hot_c, Unit::celsius) +
+                   "): it may not pull in; raise or tighten the supply, lower the ambient, or use a coil rated for a "
+                   "lower voltage";
+        case CheckId::coil_overvoltage:
+            return "the coil sees up to " + q(c.value, Unit::volt) + " against its maximum " + q(c.limit, Unit::volt) +
+                   (ok ? std::string() : std::string(": tighten the supply or use a coil rated for it"));
+        case CheckId::coil_thermal:
+            if (!c.has_value) {
+                return "the winding's own heat has no stable temperature below " + q(coil_runaway_c, Unit::celsius) +
+                       " at the highest supply (thermal resistance " +
+                       q(spec.coil.thermal_resistance_k_per_w.value_or(0), Unit::kelvin_per_watt) +
+                       "): the coil is overdriven; lower the supply or use a coil rated for it";
+            }
+            return "the winding reaches " + q(c.value, Unit::celsius) + " (" + q(k.ambient_c, Unit::celsius) +
+                   " ambient + " + q(k.rise_k, Unit::kelvin) + " rise) against its insulation limit " +
+                   q(c.limit, Unit::celsius) +
+                   (ok ? std::string()
+                       : std::string(": lower the supply, improve cooling, or use a coil with a higher class"));
+        default:
+            return {};
     }
 }
 
 std::string coil_skip_reason(CheckId id, const Spec& spec) {
     switch (id) {
-    case CheckId::coil_overvoltage: return "not checked: give coil.max_voltage to check it";
-    case CheckId::coil_thermal:
-        if (!spec.coil.thermal_resistance_k_per_w) {
-            return "not checked: give coil.thermal_resistance and coil.max_temperature to check the winding's temperature";
-        }
-        return "not checked: give coil.max_temperature (the insulation class limit) to check it";
-    default: return "not checked";
+        case CheckId::coil_overvoltage:
+            return "not checked: give coil.max_voltage to check it";
+        case CheckId::coil_thermal:
+            if (!spec.coil.thermal_resistance_k_per_w) {
+                return "not checked: give coil.thermal_resistance and coil.max_temperature to check the winding's "
+                       "temperature";
+            }
+            return "not checked: give coil.max_temperature (the insulation class limit) to check it";
+        default:
+            return "not checked";
     }
 }
 

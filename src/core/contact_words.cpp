@@ -119,7 +119,7 @@ std::string contact_skip_reason(CheckId id, const Spec& spec) {
     const bool ac = load.kind == LoadKind::ac;
     const bool rated = ac ? k.ac.has_value() : k.dc.has_value();
     std::string no_rating = "not checked: " + relay_id(spec) + " gives no " + (ac ? "AC" : "DC") +
-                                  " rating (contacts." + (ac ? "ac" : "dc") + ")";
+                            " rating (contacts." + (ac ? "ac" : "dc") + ")";
     std::string no_current = "not checked: give load.current (the steady current the contacts carry)";
     switch (id) {
         case CheckId::contact_voltage:

@@ -36,11 +36,16 @@ namespace coilfit {
 
 std::string_view clamp_type_name(ClampType type) {
     switch (type) {
-    case ClampType::diode: return "diode";
-    case ClampType::diode_zener: return "diode_zener";
-    case ClampType::diode_resistor: return "diode_resistor";
-    case ClampType::diode_tvs: return "diode_tvs";
-    case ClampType::none: return "none";
+        case ClampType::diode:
+            return "diode";
+        case ClampType::diode_zener:
+            return "diode_zener";
+        case ClampType::diode_resistor:
+            return "diode_resistor";
+        case ClampType::diode_tvs:
+            return "diode_tvs";
+        case ClampType::none:
+            return "none";
     }
     return "none";
 }

@@ -22,7 +22,9 @@ inline Lookup interpolate_log(const Points& points, double x, double ln_x, X get
         // One point is used everywhere; it is flagged (outside) when the operating point is
         // more than a factor of two away, and its side is told exactly for the direction rule.
         const double ratio = x / x_first;
-        const Side side = x > x_first * (1.0 + 1e-9) ? Side::above : x < x_first * (1.0 - 1e-9) ? Side::below : Side::within;
+        const Side side = x > x_first * (1.0 + 1e-9)   ? Side::above
+                          : x < x_first * (1.0 - 1e-9) ? Side::below
+                                                       : Side::within;
         return {get_y(points.front()), ratio > 2.0 || ratio < 0.5, side};
     }
     if (x <= x_first) {

@@ -56,7 +56,8 @@ std::vector<std::string> nearest_ids(std::string_view wanted, const std::vector<
     // Only ids within half the typed length (at least 2 edits) are offered: "NOPE" has no near id.
     const std::size_t within = std::max<std::size_t>(2, wanted.size() / 2);
     std::vector<std::string> out;
-    for (std::size_t i = 0; i < scored.size() && i < n && scored[i].first <= within; ++i) out.push_back(scored[i].second);
+    for (std::size_t i = 0; i < scored.size() && i < n && scored[i].first <= within; ++i)
+        out.push_back(scored[i].second);
     return out;
 }
 

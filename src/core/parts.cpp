@@ -24,16 +24,18 @@ double derived_rth(const std::optional<double>& given, double pd_w, double tj_ma
 
 std::string display_id(const PartOrigin& part) { return part.inline_record ? "inline " + part.id : part.id; }
 
-std::string_view bipolar_kind_name(BipolarKind kind) {
-    return kind == BipolarKind::darlington ? "darlington" : "npn";
-}
+std::string_view bipolar_kind_name(BipolarKind kind) { return kind == BipolarKind::darlington ? "darlington" : "npn"; }
 
 std::string_view diode_kind_name(DiodeKind kind) {
     switch (kind) {
-    case DiodeKind::rectifier: return "rectifier";
-    case DiodeKind::fast: return "fast";
-    case DiodeKind::signal: return "signal";
-    case DiodeKind::schottky: return "schottky";
+        case DiodeKind::rectifier:
+            return "rectifier";
+        case DiodeKind::fast:
+            return "fast";
+        case DiodeKind::signal:
+            return "signal";
+        case DiodeKind::schottky:
+            return "schottky";
     }
     return "rectifier";
 }

@@ -2,8 +2,8 @@
 
 #include <algorithm>
 #include <cmath>
-#include <map>
 #include <functional>
+#include <map>
 
 #include "coilfit/sizing.hpp"
 #include "pick_reasons.hpp"
@@ -106,12 +106,14 @@ std::vector<std::optional<Diode>> diodes_to_try(const Spec& spec, const Catalogu
 
 // Tries one transistor with every diode; hands over its best row, or each pair's row (ranked
 // among themselves when rank_pairs: a heap that ranks them anyway does not need it).
-void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::optional<Diode>>& diodes, bool all_clamps, bool rank_pairs,
-                    pick_detail::FamilyFailures& failures, PickResult& counts, const std::function<void(const Candidate&)>& row) {
+void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::optional<Diode>>& diodes, bool all_clamps,
+                    bool rank_pairs, pick_detail::FamilyFailures& failures, PickResult& counts,
+                    const std::function<void(const Candidate&)>& row) {
     // A forced gain written for the spec's own kind of transistor does not carry over: a
     // Darlington tried for an npn spec (or the other way round) takes its kind's default.
-    trial.policy.forced_gain =
-        transistor_kind_name(trial.transistor) == transistor_kind_name(spec.transistor) ? spec.policy.forced_gain : std::nullopt;
+    trial.policy.forced_gain = transistor_kind_name(trial.transistor) == transistor_kind_name(spec.transistor)
+                                   ? spec.policy.forced_gain
+                                   : std::nullopt;
     precompute_logs(trial);
     // An array channel clamps through its own built-in diode.
     const ArrayPart* array = trial.array();
@@ -131,8 +133,10 @@ void try_transistor(Spec& trial, const Spec& spec, const std::vector<std::option
         ++counts.evaluations;
         if (!c.failed.empty()) failures.add(c, sized.worst);
         passing += c.verdict == Verdict::pass ? 1U : 0U;
-        if (all_clamps) pairs.push_back(std::move(c));
-        else if (!best || ranks_before(c, *best)) best = std::move(c);
+        if (all_clamps)
+            pairs.push_back(std::move(c));
+        else if (!best || ranks_before(c, *best))
+            best = std::move(c);
     }
     trial.clamp = spec.clamp;
     if (best) {

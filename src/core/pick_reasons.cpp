@@ -13,15 +13,18 @@ std::string bipolar_drive_reason(const Evaluation& e, const std::string& family,
     // A pin whose lowest VDD does not reach Vbe(sat) drives no base current through any
     // resistor; a Darlington, whose Vbe(sat) is higher still, would not help.
     if (e.conditions.vdd_lo_v <= f.vbe_sat_v) {
-        return "the pin's lowest VDD of " + q(e.conditions.vdd_lo_v, Unit::volt) + " does not reach their Vbe(sat) of " +
-               q(f.vbe_sat_v, Unit::volt) + ", so no base resistor can drive them; a higher pin voltage, a level-shifting "
+        return "the pin's lowest VDD of " + q(e.conditions.vdd_lo_v, Unit::volt) +
+               " does not reach their Vbe(sat) of " + q(f.vbe_sat_v, Unit::volt) +
+               ", so no base resistor can drive them; a higher pin voltage, a level-shifting "
                "stage or a logic-level MOSFET would";
     }
     if (f.policy_binds) {
-        return "the pin can't supply the base current that forced gain " + format_quantity(f.forced_gain_policy, Unit::number) +
-               " asks for (" + q(f.base_current_required_a, Unit::ampere) + "); " +
-               (family == "darlington" ? "a pin or buffer that can source it would, or a logic-level MOSFET"
-                                       : "a Darlington would, or a logic-level MOSFET, or a pin or buffer that can source it");
+        return "the pin can't supply the base current that forced gain " +
+               format_quantity(f.forced_gain_policy, Unit::number) + " asks for (" +
+               q(f.base_current_required_a, Unit::ampere) + "); " +
+               (family == "darlington"
+                    ? "a pin or buffer that can source it would, or a logic-level MOSFET"
+                    : "a Darlington would, or a logic-level MOSFET, or a pin or buffer that can source it");
     }
     return "the pin can't supply the base current; " + (family == "darlington" ? std::string() : "a Darlington or ") +
            "a part with hFE min of at least " + format_quantity(f.hfe_needed, Unit::number) + at + " would";
@@ -35,16 +38,19 @@ std::string reason_for(const std::string& check, const Evaluation& e, const Spec
     const Corner corner = v ? v->corner : Corner::cold;
     const std::string at = " at " + q(e.coil_current_max_a(), Unit::ampere);
     const bool bipolar = std::holds_alternative<BipolarFigures>(e.drive);
-    if (bipolar && (check == "pin.current" || check == "transistor.saturation")) return bipolar_drive_reason(e, family, corner);
+    if (bipolar && (check == "pin.current" || check == "transistor.saturation"))
+        return bipolar_drive_reason(e, family, corner);
     if (check == "gate.drive") {
-        return "the gate gets only " + q(v->value, Unit::volt) + " from this pin, below the lowest gate voltage their Rds(on) is "
+        return "the gate gets only " + q(v->value, Unit::volt) +
+               " from this pin, below the lowest gate voltage their Rds(on) is "
                "stated at; a part rated at a lower gate voltage would";
     }
     if (check == "gate.voltage") return "the pin's highest VDD exceeds their Vgs max";
     if (check == "pin.current") return "the pin cannot carry the drive current they need";
     if (check == "input.drive") return "the pin's lowest VDD does not reach the input voltage that guarantees them on";
     if (check == "transistor.current") {
-        return "the coil current" + at + " is above " + q(spec.policy.current_derating, Unit::ratio) + " of their current rating";
+        return "the coil current" + at + " is above " + q(spec.policy.current_derating, Unit::ratio) +
+               " of their current rating";
     }
     if (check == "transistor.voltage") {
         return e.clamp.at[0].v.limited ? "the peak " + std::string(e.driver.terminal) + " voltage of " +
@@ -54,9 +60,9 @@ std::string reason_for(const std::string& check, const Evaluation& e, const Spec
     }
     if (check == "transistor.thermal") return "the junction runs too hot at the highest ambient";
     if (check == "coil.operate") {
-        return "the coil gets only " + q(v->value, Unit::volt) + " (lowest supply less their " + std::string(e.driver.drop_name) +
-               " of " + q(e.driver_at(corner).on_drop_v, Unit::volt) + ") but needs " + q(v->limit, Unit::volt) +
-               " to operate when hot";
+        return "the coil gets only " + q(v->value, Unit::volt) + " (lowest supply less their " +
+               std::string(e.driver.drop_name) + " of " + q(e.driver_at(corner).on_drop_v, Unit::volt) +
+               ") but needs " + q(v->limit, Unit::volt) + " to operate when hot";
     }
     if (check == "coil.overvoltage") return "the coil's maximum voltage is exceeded whatever the transistor";
     if (check == "resistor.power") return "the base resistor's power rating is too low for the base current they need";
@@ -87,8 +93,8 @@ void FamilyFailures::add(const Candidate& c, const Evaluation& e) {
 std::vector<std::string> FamilyFailures::reasons(const Spec& spec) const {
     std::vector<std::string> out;
     for (const auto& [family, counts] : counts_) {
-        const auto most =
-            std::max_element(counts.begin(), counts.end(), [](const auto& a, const auto& b) { return a.second < b.second; });
+        const auto most = std::max_element(counts.begin(), counts.end(),
+                                           [](const auto& a, const auto& b) { return a.second < b.second; });
         const Evaluation& e = examples_.at(family + "|" + most->first);
         out.push_back("every " + family + " part: " + reason_for(most->first, e, spec, family));
     }

@@ -2,11 +2,11 @@
 
 #include "coilfit/text.hpp"
 
-#include <array>
 #include <algorithm>
+#include <array>
 #include <charconv>
-#include <cstdio>
 #include <cmath>
+#include <cstdio>
 #include <optional>
 #include <string>
 
@@ -22,23 +22,40 @@ struct UnitInfo {
 
 UnitInfo info(Unit unit) {
     switch (unit) {
-    case Unit::ratio: return {"a ratio", "", "", "10%"};
-    case Unit::number: return {"a number", "", "", "10"};
-    case Unit::volt: return {"a voltage", "V", "_v", "12V"};
-    case Unit::ampere: return {"a current", "A", "_a", "25mA"};
-    case Unit::ohm: return {"a resistance", "Ω", "_ohm", "400R"};
-    case Unit::watt: return {"a power", "W", "_w", "360mW"};
-    case Unit::henry: return {"an inductance", "H", "_h", "0.9H"};
-    case Unit::second: return {"a time", "s", "_s", "10ms"};
-    case Unit::hertz: return {"a frequency", "Hz", "_hz", "1Hz"};
-    case Unit::joule: return {"an energy", "J", "_j", "5mJ"};
-    case Unit::coulomb: return {"a charge", "C", "_coulomb", "1mC"};
-    case Unit::celsius: return {"a temperature", "°C", "_c", "50C"};
-    case Unit::kelvin: return {"a temperature difference", "K", "_k", "25K"};
-    case Unit::kelvin_per_watt: return {"a thermal resistance", "K/W", "_k_per_w", "200K/W"};
-    case Unit::per_kelvin: return {"a temperature coefficient", "/K", "_per_k", "0.6%/K"};
-    case Unit::volt_per_kelvin: return {"a voltage temperature coefficient", "V/K", "_v_per_k", "-4mV/K"};
-    case Unit::farad: return {"a capacitance", "F", "_f", "100nF"};
+        case Unit::ratio:
+            return {"a ratio", "", "", "10%"};
+        case Unit::number:
+            return {"a number", "", "", "10"};
+        case Unit::volt:
+            return {"a voltage", "V", "_v", "12V"};
+        case Unit::ampere:
+            return {"a current", "A", "_a", "25mA"};
+        case Unit::ohm:
+            return {"a resistance", "Ω", "_ohm", "400R"};
+        case Unit::watt:
+            return {"a power", "W", "_w", "360mW"};
+        case Unit::henry:
+            return {"an inductance", "H", "_h", "0.9H"};
+        case Unit::second:
+            return {"a time", "s", "_s", "10ms"};
+        case Unit::hertz:
+            return {"a frequency", "Hz", "_hz", "1Hz"};
+        case Unit::joule:
+            return {"an energy", "J", "_j", "5mJ"};
+        case Unit::coulomb:
+            return {"a charge", "C", "_coulomb", "1mC"};
+        case Unit::celsius:
+            return {"a temperature", "°C", "_c", "50C"};
+        case Unit::kelvin:
+            return {"a temperature difference", "K", "_k", "25K"};
+        case Unit::kelvin_per_watt:
+            return {"a thermal resistance", "K/W", "_k_per_w", "200K/W"};
+        case Unit::per_kelvin:
+            return {"a temperature coefficient", "/K", "_per_k", "0.6%/K"};
+        case Unit::volt_per_kelvin:
+            return {"a voltage temperature coefficient", "V/K", "_v_per_k", "-4mV/K"};
+        case Unit::farad:
+            return {"a capacitance", "F", "_f", "100nF"};
     }
     return {"a value", "", "", "1"};
 }
@@ -49,18 +66,30 @@ struct Symbol {
     Unit unit;
 };
 constexpr std::array symbols{
-    Symbol{"°C/W", Unit::kelvin_per_watt}, Symbol{"K/W", Unit::kelvin_per_watt},
-    Symbol{"V/°C", Unit::volt_per_kelvin}, Symbol{"V/K", Unit::volt_per_kelvin},
-    Symbol{"V/C", Unit::volt_per_kelvin},  Symbol{"/°C", Unit::per_kelvin},
-    Symbol{"/K", Unit::per_kelvin},        Symbol{"/C", Unit::per_kelvin},
-    Symbol{"C/W", Unit::kelvin_per_watt},  Symbol{"ohms", Unit::ohm},
-    Symbol{"ohm", Unit::ohm},              Symbol{"Ohm", Unit::ohm},
-    Symbol{"\xCE\xA9", Unit::ohm},         Symbol{"\xE2\x84\xA6", Unit::ohm},
-    Symbol{"Hz", Unit::hertz},             Symbol{"°C", Unit::celsius},
-    Symbol{"V", Unit::volt},               Symbol{"A", Unit::ampere},
-    Symbol{"R", Unit::ohm},                Symbol{"W", Unit::watt},
-    Symbol{"H", Unit::henry},              Symbol{"s", Unit::second},
-    Symbol{"J", Unit::joule},              Symbol{"C", Unit::celsius},
+    Symbol{"°C/W", Unit::kelvin_per_watt},
+    Symbol{"K/W", Unit::kelvin_per_watt},
+    Symbol{"V/°C", Unit::volt_per_kelvin},
+    Symbol{"V/K", Unit::volt_per_kelvin},
+    Symbol{"V/C", Unit::volt_per_kelvin},
+    Symbol{"/°C", Unit::per_kelvin},
+    Symbol{"/K", Unit::per_kelvin},
+    Symbol{"/C", Unit::per_kelvin},
+    Symbol{"C/W", Unit::kelvin_per_watt},
+    Symbol{"ohms", Unit::ohm},
+    Symbol{"ohm", Unit::ohm},
+    Symbol{"Ohm", Unit::ohm},
+    Symbol{"\xCE\xA9", Unit::ohm},
+    Symbol{"\xE2\x84\xA6", Unit::ohm},
+    Symbol{"Hz", Unit::hertz},
+    Symbol{"°C", Unit::celsius},
+    Symbol{"V", Unit::volt},
+    Symbol{"A", Unit::ampere},
+    Symbol{"R", Unit::ohm},
+    Symbol{"W", Unit::watt},
+    Symbol{"H", Unit::henry},
+    Symbol{"s", Unit::second},
+    Symbol{"J", Unit::joule},
+    Symbol{"C", Unit::celsius},
     Symbol{"K", Unit::kelvin},
 };
 
@@ -76,9 +105,8 @@ struct Prefix {
     double factor;
 };
 constexpr std::array prefixes{
-    Prefix{"p", 1e-12}, Prefix{"n", 1e-9}, Prefix{"u", 1e-6}, Prefix{"\xC2\xB5", 1e-6},
-    Prefix{"\xCE\xBC", 1e-6}, Prefix{"m", 1e-3}, Prefix{"k", 1e3}, Prefix{"M", 1e6},
-    Prefix{"G", 1e9},
+    Prefix{"p", 1e-12}, Prefix{"n", 1e-9}, Prefix{"u", 1e-6}, Prefix{"\xC2\xB5", 1e-6}, Prefix{"\xCE\xBC", 1e-6},
+    Prefix{"m", 1e-3},  Prefix{"k", 1e3},  Prefix{"M", 1e6},  Prefix{"G", 1e9},
 };
 
 std::string_view trim(std::string_view s) {
@@ -118,12 +146,25 @@ std::optional<double> parse_rkm(std::string_view s) {
         if (is_digit(s[i])) continue;
         if (letter != std::string_view::npos) return std::nullopt;
         switch (s[i]) {
-        case 'R': case 'r': factor = 1.0; break;
-        case 'k': case 'K': factor = 1e3; break;
-        case 'M': factor = 1e6; break;
-        case 'G': factor = 1e9; break;
-        case 'm': factor = 1e-3; break;
-        default: return std::nullopt;
+            case 'R':
+            case 'r':
+                factor = 1.0;
+                break;
+            case 'k':
+            case 'K':
+                factor = 1e3;
+                break;
+            case 'M':
+                factor = 1e6;
+                break;
+            case 'G':
+                factor = 1e9;
+                break;
+            case 'm':
+                factor = 1e-3;
+                break;
+            default:
+                return std::nullopt;
         }
         letter = i;
     }
@@ -160,30 +201,34 @@ std::string format_quantity(double value, Unit unit, int significant) {
     if (!std::isfinite(value)) return "n/a";
     significant = std::clamp(significant, 1, 12);
     switch (unit) {
-    case Unit::ratio:
-        // 100 x a value near the largest double overflows: print the fraction then.
-        if (!std::isfinite(value * 100.0)) return plain_number(value, significant);
-        return plain_number(value * 100.0, significant) + " %";
-    case Unit::number: return plain_number(value, significant);
-    case Unit::celsius: {
-        if (std::abs(value) >= 1e15) return plain_number(value, significant) + " °C";
-        char buf[64];
-        std::snprintf(buf, sizeof buf, "%.1f", value);
-        return std::string(buf) + " °C";
-    }
-    case Unit::kelvin: return plain_number(value, significant) + " K";
-    case Unit::kelvin_per_watt: return plain_number(value, significant) + " K/W";
-    case Unit::per_kelvin:
-        if (!std::isfinite(value * 100.0)) return plain_number(value, significant) + " /K";
-        return plain_number(value * 100.0, significant) + " %/K";
-    default: break;
+        case Unit::ratio:
+            // 100 x a value near the largest double overflows: print the fraction then.
+            if (!std::isfinite(value * 100.0)) return plain_number(value, significant);
+            return plain_number(value * 100.0, significant) + " %";
+        case Unit::number:
+            return plain_number(value, significant);
+        case Unit::celsius: {
+            if (std::abs(value) >= 1e15) return plain_number(value, significant) + " °C";
+            char buf[64];
+            std::snprintf(buf, sizeof buf, "%.1f", value);
+            return std::string(buf) + " °C";
+        }
+        case Unit::kelvin:
+            return plain_number(value, significant) + " K";
+        case Unit::kelvin_per_watt:
+            return plain_number(value, significant) + " K/W";
+        case Unit::per_kelvin:
+            if (!std::isfinite(value * 100.0)) return plain_number(value, significant) + " /K";
+            return plain_number(value * 100.0, significant) + " %/K";
+        default:
+            break;
     }
     // A frequency below 1 Hz reads plainly ("0.1 Hz"): "100 mHz" is misread as megahertz.
     if (unit == Unit::hertz && std::abs(value) >= 1e-3 && std::abs(value) < 1.0) {
         return plain_number(value, significant) + " Hz";
     }
-    static constexpr std::array<std::pair<double, std::string_view>, 8> steps{{
-        {1e9, "G"}, {1e6, "M"}, {1e3, "k"}, {1.0, ""}, {1e-3, "m"}, {1e-6, "µ"}, {1e-9, "n"}, {1e-12, "p"}}};
+    static constexpr std::array<std::pair<double, std::string_view>, 8> steps{
+        {{1e9, "G"}, {1e6, "M"}, {1e3, "k"}, {1.0, ""}, {1e-3, "m"}, {1e-6, "µ"}, {1e-9, "n"}, {1e-12, "p"}}};
     const double mag = std::abs(value);
     std::size_t pick = 3;  // no prefix for zero, nor far outside the prefixes (1e+20 V)
     if (mag > 0 && mag < 1e15 && mag >= 1e-15) {
@@ -199,8 +244,7 @@ std::string format_quantity(double value, Unit unit, int significant) {
         }
     }
     const double scaled = value / steps[pick].first;
-    return plain_number(scaled, significant) + " " + std::string(steps[pick].second) +
-           std::string(info(unit).symbol);
+    return plain_number(scaled, significant) + " " + std::string(steps[pick].second) + std::string(info(unit).symbol);
 }
 
 std::string_view unit_noun(Unit unit) { return info(unit).noun; }
@@ -223,7 +267,10 @@ double read_number(std::string_view s, std::string_view text, Unit expected, std
     std::size_t digits = 0;
     bool point = false;
     while (i < s.size() && (is_digit(s[i]) || (s[i] == '.' && !point))) {
-        if (s[i] == '.') point = true; else ++digits;
+        if (s[i] == '.')
+            point = true;
+        else
+            ++digits;
         ++i;
     }
     if (digits == 0) fail(expected, text);
@@ -257,7 +304,8 @@ Suffix read_suffix(std::string_view rest, std::string_view text, Unit expected) 
         return {0.01, Unit::ratio};
     }
     if (rest == "%/K" || rest == "%/°C" || rest == "%/C") return {0.01, Unit::per_kelvin};
-    if (expected == Unit::ohm && rest.front() == 'K' && (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
+    if (expected == Unit::ohm && rest.front() == 'K' &&
+        (rest.size() == 1 || match_symbol(rest.substr(1)) == Unit::ohm)) {
         // "33K" and "2.2KΩ" for kilo-ohms are common on resistor labels.
         out.factor = 1e3;
         if (rest.size() > 1) out.unit = Unit::ohm;
@@ -297,15 +345,16 @@ double parse_quantity(std::string_view text, Unit expected) {
     const Suffix suffix = read_suffix(rest, text, expected);
     std::optional<Unit> found = suffix.unit;
     // "C" is a coulomb where a charge is expected ("1.5nC"), a temperature elsewhere.
-    if (found == Unit::celsius && expected == Unit::coulomb && (rest.back() == 'C') && rest.find("°") == std::string_view::npos) {
+    if (found == Unit::celsius && expected == Unit::coulomb && (rest.back() == 'C') &&
+        rest.find("°") == std::string_view::npos) {
         found = Unit::coulomb;
     }
     if (found && *found != expected) {
         fail(expected, text, info(*found).noun);
     }
-    if (suffix.factor != 1.0 && (expected == Unit::celsius || expected == Unit::kelvin ||
-                                 expected == Unit::number || (expected == Unit::ratio && !found) ||
-                                 (expected == Unit::per_kelvin && found != Unit::per_kelvin))) {
+    if (suffix.factor != 1.0 &&
+        (expected == Unit::celsius || expected == Unit::kelvin || expected == Unit::number ||
+         (expected == Unit::ratio && !found) || (expected == Unit::per_kelvin && found != Unit::per_kelvin))) {
         fail(expected, text, "no prefix here");
     }
     const double result = value * suffix.factor;

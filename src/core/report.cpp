@@ -11,12 +11,18 @@ namespace coilfit {
 
 std::string check_message(CheckId id, const CheckValue& c, const Spec& spec, const Evaluation& e) {
     switch (check_info(id).stage) {
-    case Stage::coil: return coil_message(id, c, spec, e);
-    case Stage::clamp: return clamp_message(id, c, spec, e);
-    case Stage::timing: return timing_message(id, c, spec, e);
-    case Stage::contact: return contact_message(id, c, spec);
-    case Stage::board: return {};  // a board's checks are worded in src/core/board_words.cpp
-    case Stage::driver: break;
+        case Stage::coil:
+            return coil_message(id, c, spec, e);
+        case Stage::clamp:
+            return clamp_message(id, c, spec, e);
+        case Stage::timing:
+            return timing_message(id, c, spec, e);
+        case Stage::contact:
+            return contact_message(id, c, spec);
+        case Stage::board:
+            return {};  // a board's checks are worded in src/core/board_words.cpp
+        case Stage::driver:
+            break;
     }
     if (spec.bipolar()) return bipolar_message(id, c, spec, e);
     if (spec.mosfet()) return mosfet_message(id, c, spec, e);
@@ -25,27 +31,39 @@ std::string check_message(CheckId id, const CheckValue& c, const Spec& spec, con
 
 std::string check_skip_reason(CheckId id, const Spec& spec) {
     switch (check_info(id).stage) {
-    case Stage::coil: return coil_skip_reason(id, spec);
-    case Stage::clamp: return clamp_skip_reason(id, spec);
-    case Stage::timing: return timing_skip_reason(id, spec);
-    case Stage::contact: return contact_skip_reason(id, spec);
-    case Stage::board: return "not checked: a board's check (coilfit board)";
-    case Stage::driver: break;
+        case Stage::coil:
+            return coil_skip_reason(id, spec);
+        case Stage::clamp:
+            return clamp_skip_reason(id, spec);
+        case Stage::timing:
+            return timing_skip_reason(id, spec);
+        case Stage::contact:
+            return contact_skip_reason(id, spec);
+        case Stage::board:
+            return "not checked: a board's check (coilfit board)";
+        case Stage::driver:
+            break;
     }
     switch (id) {
-    case CheckId::gate_drive:
-    case CheckId::gate_voltage: return "not checked: a MOSFET driver's check";
-    case CheckId::input_drive: return "not checked: a transistor-array channel's check";
-    case CheckId::transistor_saturation: return "not checked: a bipolar driver's check";
-    case CheckId::resistor_power:
-        return spec.bipolar() ? "not checked: no base resistor" : "not checked: a bipolar driver's base resistor check";
-    default: return "not checked";
+        case CheckId::gate_drive:
+        case CheckId::gate_voltage:
+            return "not checked: a MOSFET driver's check";
+        case CheckId::input_drive:
+            return "not checked: a transistor-array channel's check";
+        case CheckId::transistor_saturation:
+            return "not checked: a bipolar driver's check";
+        case CheckId::resistor_power:
+            return spec.bipolar() ? "not checked: no base resistor"
+                                  : "not checked: a bipolar driver's base resistor check";
+        default:
+            return "not checked";
     }
 }
 
 Unit check_unit(CheckId id, const CheckValue& c) {
     if (id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::avalanche)) return Unit::joule;
-    if (id == CheckId::contact_min_load && c.detail == static_cast<std::uint8_t>(ContactCase::min_voltage)) return Unit::volt;
+    if (id == CheckId::contact_min_load && c.detail == static_cast<std::uint8_t>(ContactCase::min_voltage))
+        return Unit::volt;
     return check_info(id).unit;
 }
 
@@ -55,7 +73,8 @@ const Check* SizingReport::find_check(std::string_view id) const {
 }
 
 std::optional<double> SizingReport::quantity(std::string_view key) const {
-    const auto it = std::find_if(quantities.begin(), quantities.end(), [&](const QuantityEntry& e) { return e.key == key; });
+    const auto it =
+        std::find_if(quantities.begin(), quantities.end(), [&](const QuantityEntry& e) { return e.key == key; });
     if (it == quantities.end()) return std::nullopt;
     return it->value;
 }
@@ -74,12 +93,16 @@ namespace {
 // Skipped checks that belong to another driver kind are left out of the report altogether.
 bool belongs_to_kind(CheckId id, const Spec& spec) {
     switch (id) {
-    case CheckId::transistor_saturation:
-    case CheckId::resistor_power: return spec.bipolar() != nullptr;
-    case CheckId::gate_drive:
-    case CheckId::gate_voltage: return spec.mosfet() != nullptr;
-    case CheckId::input_drive: return spec.array() != nullptr;
-    default: return true;
+        case CheckId::transistor_saturation:
+        case CheckId::resistor_power:
+            return spec.bipolar() != nullptr;
+        case CheckId::gate_drive:
+        case CheckId::gate_voltage:
+            return spec.mosfet() != nullptr;
+        case CheckId::input_drive:
+            return spec.array() != nullptr;
+        default:
+            return true;
     }
 }
 
@@ -115,11 +138,13 @@ SizingReport size(const Spec& spec, const Catalogue& catalogue) {
         } else {
             if (c.has_value && std::isfinite(c.value)) out.value = c.value;
             // A zener without pulse data has nothing to compare against: no limit, no margin.
-            const bool unrated = id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::unrated);
+            const bool unrated =
+                id == CheckId::clamp_pulse && c.detail == static_cast<std::uint8_t>(PulseCase::unrated);
             if (std::isfinite(c.limit) && !unrated) out.limit = c.limit;
             if (const double m = c.margin(); std::isfinite(m) && !unrated) out.margin = m;
             out.message = check_message(id, c, r.spec, e);
-            if (c.beyond_data) out.message += " (beyond the part's data: the nearest point was used on its unsafe side)";
+            if (c.beyond_data)
+                out.message += " (beyond the part's data: the nearest point was used on its unsafe side)";
         }
         failed = failed || c.verdict == Verdict::fail;
         r.has_warnings = r.has_warnings || c.verdict == Verdict::warn;

@@ -16,7 +16,8 @@ namespace coilfit::report {
 [[nodiscard]] std::vector<ClampOption> clamp_options(const Spec& spec, const Catalogue& catalogue, const Sized& sized);
 // The contact side (report_contact.cpp): its section, its quantities and notes; the section is
 // present when the spec names a relay or the kind of its load.
-[[nodiscard]] std::optional<ContactReport> contact_report(const Spec& spec, const std::vector<ClampOption>& clamp_options);
+[[nodiscard]] std::optional<ContactReport> contact_report(const Spec& spec,
+                                                          const std::vector<ClampOption>& clamp_options);
 void contact_quantities(std::vector<QuantityEntry>& out, const Spec& spec);
 void contact_notes(std::vector<std::string>& out, const Spec& spec);
 [[nodiscard]] bool contact_side_shown(const Spec& spec);

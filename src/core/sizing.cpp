@@ -40,15 +40,16 @@ void corner(const Prepared& p, const D& d, const Conditions& c, double r_drive_o
     stages::drive_corner(d, spec, c, in, r_drive_ohm, all, fig.at[k], e.driver.at[k], checks);
     coil_checks(spec.coil, coil, e.driver.at[k], c.vs_hi_v, checks);
     const double ln_i0 = coil.current_max_a == in.current_a ? in.ln_current : std::log(coil.current_max_a);
-    stages::clamp_corner(p, c, coil.current_max_a, ln_i0, coil.ambient_c, coil.r_cold_ohm, e.coil.release_current_a, e.driver,
-                         all, e.clamp.at[k], checks);
+    stages::clamp_corner(p, c, coil.current_max_a, ln_i0, coil.ambient_c, coil.r_cold_ohm, e.coil.release_current_a,
+                         e.driver, all, e.clamp.at[k], checks);
     stages::timing_corner(spec, coil, e.driver.at[k], e.clamp.at[k], all, e.timing.at[k], checks);
     contact_checks(spec, checks);
 }
 
 // Writes every check anew (a reused Evaluation starts with each verdict skipped).
 template <typename D>
-void evaluate_with(const Prepared& p, const D& d, const Conditions& c, double r_drive_ohm, Figures figures, Evaluation& e) {
+void evaluate_with(const Prepared& p, const D& d, const Conditions& c, double r_drive_ohm, Figures figures,
+                   Evaluation& e) {
     const bool all = figures == Figures::all;
     const Spec& spec = *p.spec;
     e.checks.clear_verdicts();
@@ -82,7 +83,8 @@ void evaluate_with(const Prepared& p, const D& d, const Conditions& c, double r_
     }
     if (all) {
         stages::design_figures(d, spec, c, r_drive_ohm, fig);
-        if (spec.coil.inductance_h) e.clamp.stored_energy_j = stored_energy(*spec.coil.inductance_h, e.coil_current_max_a());
+        if (spec.coil.inductance_h)
+            e.clamp.stored_energy_j = stored_energy(*spec.coil.inductance_h, e.coil_current_max_a());
     }
 }
 
@@ -103,9 +105,12 @@ Prepared prepare(const Spec& spec) {
     std::visit(
         [&](const auto& part) {
             using P = std::decay_t<decltype(part)>;
-            if constexpr (std::is_same_v<P, Bipolar>) p.driver = prepare_bipolar(spec, part, p.pin_r_out_ohm);
-            else if constexpr (std::is_same_v<P, Mosfet>) p.driver = prepare_mosfet(spec, part, p.pin_r_out_ohm);
-            else p.driver = prepare_array(spec, part);
+            if constexpr (std::is_same_v<P, Bipolar>)
+                p.driver = prepare_bipolar(spec, part, p.pin_r_out_ohm);
+            else if constexpr (std::is_same_v<P, Mosfet>)
+                p.driver = prepare_mosfet(spec, part, p.pin_r_out_ohm);
+            else
+                p.driver = prepare_array(spec, part);
         },
         spec.transistor);
     stages::prepare_clamp(spec, p);

@@ -59,8 +59,9 @@ void design_figures(const ArrayDriver& d, const Spec& spec, const Conditions& c,
 void prepare_clamp(const Spec& spec, Prepared& p);
 // The clamp at one corner: clamp voltages, peak, decay, the clamp's and the diode's checks and
 // transistor.voltage.
-void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double ambient_c, double r_coil_cold_ohm,
-                  double release_current_a, const DriverCommon& driver, bool all, ClampCorner& out, CheckSet& checks);
+void clamp_corner(const Prepared& p, const Conditions& c, double i0_a, double ln_i0, double ambient_c,
+                  double r_coil_cold_ohm, double release_current_a, const DriverCommon& driver, bool all,
+                  ClampCorner& out, CheckSet& checks);
 // release.time, switching.timing and the operate time at one corner.
 void timing_corner(const Spec& spec, const CoilCorner& coil, const DriverCorner& driver, const ClampCorner& clamp,
                    bool all, TimingCorner& out, CheckSet& checks);

@@ -54,7 +54,8 @@ void timing_corner(const Spec& spec, const CoilCorner& coil, const DriverCorner&
     double t_end = clamp.current_zero_time_s;
     if (clamp.end_time_is_bound && t_end > off_s) {
         // The bound does not fit: the exact time to zero, tau ln(1 + I0 R / Vc).
-        t_end = clamp.slow_vc_over_r_a > 0 ? clamp.slow_tau_s * std::log1p(clamp.i0_a / clamp.slow_vc_over_r_a) : INFINITY;
+        t_end =
+            clamp.slow_vc_over_r_a > 0 ? clamp.slow_tau_s * std::log1p(clamp.i0_a / clamp.slow_vc_over_r_a) : INFINITY;
     }
     CheckValue off = at_most(t_end, off_s);
     off.detail = static_cast<std::uint8_t>(SwitchingCase::off_time);
@@ -69,43 +70,49 @@ std::string timing_message(CheckId id, const CheckValue& c, const Spec& spec, co
     const bool ok = c.verdict == Verdict::pass || c.verdict == Verdict::warn;
     (void)e;
     switch (id) {
-    case CheckId::release_time:
-        return "the coil current falls to the release current in " + q(c.value, Unit::second) +
-               " (cold coil, lowest clamp voltage) against " + q(c.limit, Unit::second) +
-               "; the contacts open after the armature moves as well" +
-               (ok ? std::string() : ": a diode + zener clamp releases faster; see the clamp options");
-    case CheckId::switching_timing: {
-        const auto how = static_cast<SwitchingCase>(c.detail);
-        const std::string at = " at " + q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + ", " +
-                               q(spec.switching.duty, Unit::ratio) + " on";
-        if (how == SwitchingCase::never_operates) {
-            return "the coil current never reaches the operate current at the lowest supply, so no on-time is long enough";
+        case CheckId::release_time:
+            return "the coil current falls to the release current in " + q(c.value, Unit::second) +
+                   " (cold coil, lowest clamp voltage) against " + q(c.limit, Unit::second) +
+                   "; the contacts open after the armature moves as well" +
+                   (ok ? std::string() : ": a diode + zener clamp releases faster; see the clamp options");
+        case CheckId::switching_timing: {
+            const auto how = static_cast<SwitchingCase>(c.detail);
+            const std::string at = " at " + q(spec.switching.frequency_hz.value_or(0), Unit::hertz) + ", " +
+                                   q(spec.switching.duty, Unit::ratio) + " on";
+            if (how == SwitchingCase::never_operates) {
+                return "the coil current never reaches the operate current at the lowest supply, so no on-time is long "
+                       "enough";
+            }
+            if (how == SwitchingCase::off_time) {
+                return "the coil current takes " + q(c.value, Unit::second) +
+                       " to reach zero after turn-off against the off-time " + q(c.limit, Unit::second) + at +
+                       (ok ? std::string()
+                           : ": switch less often, lower the duty, or use a faster clamp (diode + zener)");
+            }
+            return "the coil current takes " + q(c.value, Unit::second) +
+                   " to reach the operate current against the on-time " + q(c.limit, Unit::second) + at +
+                   " (the armature's travel comes on top)" +
+                   (ok ? std::string() : ": switch less often or raise the duty");
         }
-        if (how == SwitchingCase::off_time) {
-            return "the coil current takes " + q(c.value, Unit::second) + " to reach zero after turn-off against the off-time " +
-                   q(c.limit, Unit::second) + at +
-                   (ok ? std::string() : ": switch less often, lower the duty, or use a faster clamp (diode + zener)");
-        }
-        return "the coil current takes " + q(c.value, Unit::second) + " to reach the operate current against the on-time " +
-               q(c.limit, Unit::second) + at + " (the armature's travel comes on top)" +
-               (ok ? std::string() : ": switch less often or raise the duty");
-    }
-    default: return {};
+        default:
+            return {};
     }
 }
 
 std::string timing_skip_reason(CheckId id, const Spec& spec) {
     switch (id) {
-    case CheckId::release_time:
-        if (!spec.coil.max_release_time_s) return "not checked: give coil.max_release_time to check it";
-        if (spec.clamp.type == ClampType::none) {
-            return "not checked: without a clamp the turn-off is set by the transistor's breakdown; fit a clamp";
-        }
-        return "not checked: give coil.inductance to estimate the release time";
-    case CheckId::switching_timing:
-        if (!spec.switching.frequency_hz) return "not checked: give switching.frequency to check the on and off times";
-        return "not checked: give coil.inductance to estimate the coil current's rise and fall";
-    default: return "not checked";
+        case CheckId::release_time:
+            if (!spec.coil.max_release_time_s) return "not checked: give coil.max_release_time to check it";
+            if (spec.clamp.type == ClampType::none) {
+                return "not checked: without a clamp the turn-off is set by the transistor's breakdown; fit a clamp";
+            }
+            return "not checked: give coil.inductance to estimate the release time";
+        case CheckId::switching_timing:
+            if (!spec.switching.frequency_hz)
+                return "not checked: give switching.frequency to check the on and off times";
+            return "not checked: give coil.inductance to estimate the coil current's rise and fall";
+        default:
+            return "not checked";
     }
 }
 

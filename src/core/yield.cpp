@@ -36,14 +36,13 @@ inline double acklam_quantile(double p) {
     // Acklam, P. J. (2003), "An algorithm for computing the inverse normal cumulative
     // distribution function": rational approximations in a central region and two tails.
     // Coefficients from memory; the tests check the round trip against std::erfc.
-    constexpr double a[] = {-3.969683028665376e+01, 2.209460984245205e+02, -2.759285104469687e+02,
+    constexpr double a[] = {-3.969683028665376e+01, 2.209460984245205e+02,  -2.759285104469687e+02,
                             1.383577518672690e+02,  -3.066479806614716e+01, 2.506628277459239e+00};
     constexpr double b[] = {-5.447609879822406e+01, 1.615858368580409e+02, -1.556989798598866e+02,
-                            6.680131188771972e+01,  -1.328068155288572e+01};
+                            6.680131188771972e+01, -1.328068155288572e+01};
     constexpr double c[] = {-7.784894002430293e-03, -3.223964580411365e-01, -2.400758277161838e+00,
                             -2.549732539343734e+00, 4.374664141464968e+00,  2.938163982698783e+00};
-    constexpr double d[] = {7.784695709041462e-03, 3.224671290700398e-01, 2.445134137142996e+00,
-                            3.754408661907416e+00};
+    constexpr double d[] = {7.784695709041462e-03, 3.224671290700398e-01, 2.445134137142996e+00, 3.754408661907416e+00};
     constexpr double p_low = 0.02425;
     if (!(p > 0)) return -std::numeric_limits<double>::infinity();
     if (!(p < 1)) return std::numeric_limits<double>::infinity();
@@ -86,15 +85,24 @@ std::string_view distribution_name(Distribution d) { return d == Distribution::n
 
 std::string_view yield_input_name(YieldInput input) {
     switch (input) {
-    case YieldInput::supply: return "supply.voltage";
-    case YieldInput::ambient: return "ambient";
-    case YieldInput::pin_vdd: return "pin.vdd";
-    case YieldInput::coil_resistance: return "coil.resistance";
-    case YieldInput::base_resistor: return "base_resistor.tolerance";
-    case YieldInput::zener: return "clamp.zener";
-    case YieldInput::gain: return "transistor.hfe";
-    case YieldInput::clamp_resistor: return "clamp.resistor";
-    case YieldInput::rds_on: return "transistor.rds_on";
+        case YieldInput::supply:
+            return "supply.voltage";
+        case YieldInput::ambient:
+            return "ambient";
+        case YieldInput::pin_vdd:
+            return "pin.vdd";
+        case YieldInput::coil_resistance:
+            return "coil.resistance";
+        case YieldInput::base_resistor:
+            return "base_resistor.tolerance";
+        case YieldInput::zener:
+            return "clamp.zener";
+        case YieldInput::gain:
+            return "transistor.hfe";
+        case YieldInput::clamp_resistor:
+            return "clamp.resistor";
+        case YieldInput::rds_on:
+            return "transistor.rds_on";
     }
     return "supply.voltage";
 }
@@ -182,13 +190,14 @@ YieldCounts count_samples(const Prepared& prepared, const Conditions& box, doubl
         for (std::size_t k = 0; k < check_count; ++k) {
             const bool thermal = static_cast<CheckId>(k) == CheckId::coil_thermal &&
                                  prepared.spec->coil.thermal_resistance_k_per_w.has_value();
-            if (worst.checks.values[k].verdict != Verdict::skip || thermal) in_use[n_in_use++] = static_cast<std::uint8_t>(k);
+            if (worst.checks.values[k].verdict != Verdict::skip || thermal)
+                in_use[n_in_use++] = static_cast<std::uint8_t>(k);
         }
     }
     // Samples go a block at a time, input by input: the draws of a block are independent
     // chains the processor overlaps. The positions are those of sample_positions().
     std::array<BandPositions, draw_block> block{};  // inputs that do not vary stay at 0
-    Evaluation e;  // reused: every verdict is written anew by each evaluation
+    Evaluation e;                                   // reused: every verdict is written anew by each evaluation
     for (std::uint64_t start = first; start < last; start += draw_block) {
         const auto n = static_cast<std::size_t>(std::min<std::uint64_t>(draw_block, last - start));
         for (std::size_t s = 0; s < yield_input_count; ++s) {
@@ -288,7 +297,8 @@ YieldResult run_yield(const Spec& given, const YieldSettings& settings, const Yi
     {
         std::vector<std::jthread> pool;
         pool.reserve(threads - 1);
-        for (std::uint64_t t = 1; t < threads; ++t) pool.emplace_back([&work, &per_thread, t] { work(per_thread[t], false); });
+        for (std::uint64_t t = 1; t < threads; ++t)
+            pool.emplace_back([&work, &per_thread, t] { work(per_thread[t], false); });
         work(per_thread[0], true);
     }  // joins
     YieldCounts all;

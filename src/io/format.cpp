@@ -28,12 +28,14 @@ std::size_t code_point_width(char32_t cp) {
     struct Range {
         char32_t lo, hi;
     };
-    static constexpr Range zero[] = {{0x0300, 0x036F}, {0x0483, 0x0489}, {0x0591, 0x05BD}, {0x0610, 0x061A}, {0x064B, 0x065F},
-                                     {0x200B, 0x200F}, {0x202A, 0x202E}, {0x2060, 0x2064}, {0x20D0, 0x20FF}, {0xFE00, 0xFE0F},
-                                     {0xFE20, 0xFE2F}, {0xFEFF, 0xFEFF}, {0xE0100, 0xE01EF}};
-    static constexpr Range wide[] = {{0x1100, 0x115F}, {0x231A, 0x231B}, {0x2E80, 0x303E}, {0x3041, 0x33FF}, {0x3400, 0x4DBF},
-                                     {0x4E00, 0x9FFF}, {0xA000, 0xA4CF}, {0xAC00, 0xD7A3}, {0xF900, 0xFAFF}, {0xFE30, 0xFE4F},
-                                     {0xFF00, 0xFF60}, {0xFFE0, 0xFFE6}, {0x1F300, 0x1F64F}, {0x1F900, 0x1F9FF}, {0x20000, 0x3FFFD}};
+    static constexpr Range zero[] = {{0x0300, 0x036F},  {0x0483, 0x0489}, {0x0591, 0x05BD}, {0x0610, 0x061A},
+                                     {0x064B, 0x065F},  {0x200B, 0x200F}, {0x202A, 0x202E}, {0x2060, 0x2064},
+                                     {0x20D0, 0x20FF},  {0xFE00, 0xFE0F}, {0xFE20, 0xFE2F}, {0xFEFF, 0xFEFF},
+                                     {0xE0100, 0xE01EF}};
+    static constexpr Range wide[] = {{0x1100, 0x115F},   {0x231A, 0x231B},   {0x2E80, 0x303E},  {0x3041, 0x33FF},
+                                     {0x3400, 0x4DBF},   {0x4E00, 0x9FFF},   {0xA000, 0xA4CF},  {0xAC00, 0xD7A3},
+                                     {0xF900, 0xFAFF},   {0xFE30, 0xFE4F},   {0xFF00, 0xFF60},  {0xFFE0, 0xFFE6},
+                                     {0x1F300, 0x1F64F}, {0x1F900, 0x1F9FF}, {0x20000, 0x3FFFD}};
     for (const Range& r : zero) {
         if (cp >= r.lo && cp <= r.hi) return 0;
     }
@@ -75,8 +77,10 @@ std::string wrap(std::string_view text, std::size_t width, std::size_t indent) {
             const bool unit_like = display_width(w) <= 4 && w.find_first_of("0123456789") == std::string::npos;
             const bool after_number = !words.empty() && !words.back().empty() &&
                                       std::isdigit(static_cast<unsigned char>(words.back().back())) != 0;
-            if (unit_like && after_number) words.back() += " " + w;
-            else words.push_back(w);
+            if (unit_like && after_number)
+                words.back() += " " + w;
+            else
+                words.push_back(w);
         }
     }
     std::string out;

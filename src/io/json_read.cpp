@@ -2,9 +2,9 @@
 
 #include <array>
 #include <cerrno>
-#include <filesystem>
 #include <cmath>
 #include <cstdio>
+#include <filesystem>
 #include <fstream>
 #include <iostream>
 #include <iterator>
@@ -39,17 +39,22 @@ void check_depth(std::string_view text, const std::string& file) {
     bool escaped = false;
     for (const char c : text) {
         if (in_string) {
-            if (escaped) escaped = false;
-            else if (c == '\\') escaped = true;
-            else if (c == '"') in_string = false;
+            if (escaped)
+                escaped = false;
+            else if (c == '\\')
+                escaped = true;
+            else if (c == '"')
+                in_string = false;
             continue;
         }
-        if (c == '"') in_string = true;
+        if (c == '"')
+            in_string = true;
         else if (c == '[' || c == '{') {
             if (++depth > max_depth) {
                 throw InputError(file + ": nested deeper than " + std::to_string(max_depth) + " levels");
             }
-        } else if ((c == ']' || c == '}') && depth > 0) --depth;
+        } else if ((c == ']' || c == '}') && depth > 0)
+            --depth;
     }
 }
 
@@ -99,8 +104,10 @@ private:
     [[nodiscard]] std::string path() const {
         std::string p;
         for (const Frame& f : frames_) {
-            if (f.object) p += (p.empty() ? "" : ".") + printable(f.key, 40);
-            else p += "[" + std::to_string(f.index) + "]";
+            if (f.object)
+                p += (p.empty() ? "" : ".") + printable(f.key, 40);
+            else
+                p += "[" + std::to_string(f.index) + "]";
         }
         return p;
     }
@@ -157,12 +164,22 @@ Json parse_json(std::string_view text, const std::string& file, std::size_t max_
     const auto cb = [&keys](int, nlohmann::json::parse_event_t event, Json& parsed) {
         using E = nlohmann::json::parse_event_t;
         switch (event) {
-        case E::object_start: keys.start(true); break;
-        case E::array_start: keys.start(false); break;
-        case E::object_end:
-        case E::array_end: keys.end(); break;
-        case E::key: keys.key(parsed.get_ref<const std::string&>()); break;
-        case E::value: keys.value(); break;
+            case E::object_start:
+                keys.start(true);
+                break;
+            case E::array_start:
+                keys.start(false);
+                break;
+            case E::object_end:
+            case E::array_end:
+                keys.end();
+                break;
+            case E::key:
+                keys.key(parsed.get_ref<const std::string&>());
+                break;
+            case E::value:
+                keys.value();
+                break;
         }
         return true;
     };
@@ -203,20 +220,25 @@ Json parse_json(std::string_view text, const std::string& file, std::size_t max_
 
 std::string describe(const Json& j) {
     switch (j.type()) {
-    case Json::value_t::string: return "\"" + printable(j.get_ref<const Json::string_t&>(), 40) + "\"";
-    case Json::value_t::boolean: return j.get<bool>() ? "true" : "false";
-    case Json::value_t::null: return "null";
-    case Json::value_t::object: return "an object";
-    case Json::value_t::array: return "a list";
-    default: return printable(j.dump(), 40);
+        case Json::value_t::string:
+            return "\"" + printable(j.get_ref<const Json::string_t&>(), 40) + "\"";
+        case Json::value_t::boolean:
+            return j.get<bool>() ? "true" : "false";
+        case Json::value_t::null:
+            return "null";
+        case Json::value_t::object:
+            return "an object";
+        case Json::value_t::array:
+            return "a list";
+        default:
+            return printable(j.dump(), 40);
     }
 }
 
 ObjectReader::ObjectReader(const Json& j, const Origin& origin, std::string path)
     : j_(j), origin_(origin), path_(std::move(path)) {
     if (!j_.is_object()) {
-        io::fail(origin_, path_.empty() ? std::string() : path_,
-                 "expected a JSON object { ... }, got " + describe(j_));
+        io::fail(origin_, path_.empty() ? std::string() : path_, "expected a JSON object { ... }, got " + describe(j_));
     }
 }
 
@@ -256,7 +278,8 @@ std::optional<double> ObjectReader::quantity(const std::string& key, Unit unit) 
             fail_at(key, e.what());
         }
     } else {
-        fail_at(key, fmt::format("expected {} such as \"{}\", got {}", unit_noun(unit), unit_example(unit), describe(*v)));
+        fail_at(key,
+                fmt::format("expected {} such as \"{}\", got {}", unit_noun(unit), unit_example(unit), describe(*v)));
     }
     if (!std::isfinite(value)) fail_at(key, fmt::format("expected {}, got a number out of range", unit_noun(unit)));
     if (value == 0) value = 0.0;  // no "-0" in reports
@@ -280,7 +303,8 @@ std::optional<std::string> ObjectReader::text(const std::string& key, std::size_
     if (!is_utf8(s)) fail_at(key, "expected UTF-8 text, got \"" + printable(s) + "\"");
     const std::size_t chars = count_characters(s);
     if (chars > max_len) fail_at(key, fmt::format("expected a text of at most {} characters, got {}", max_len, chars));
-    if (has_bidi_control(s)) fail_at(key, "expected a text without bidirectional controls, got \"" + printable(s) + "\"");
+    if (has_bidi_control(s))
+        fail_at(key, "expected a text without bidirectional controls, got \"" + printable(s) + "\"");
     if (has_control(s)) fail_at(key, "expected a text without control characters, got \"" + printable(s) + "\"");
     return s;
 }
@@ -317,10 +341,11 @@ double ObjectReader::fraction(const std::string& key, double value, double lo, d
     if (!ok) {
         // 10 written as a plain number means 1000 %: say how to write a percentage.
         const bool hint = value > 1 && plain_numbers_.count(key) > 0;
-        fail_at(key, fmt::format("expected {} from {} to {}{}, got {}{}", noun(key), format_quantity(lo, Unit::ratio, 6),
-                                 hi_inclusive ? "" : "below ", format_quantity(hi, Unit::ratio, 6),
-                                 format_quantity(value, Unit::ratio, 6),
-                                 hint ? fmt::format(" (a plain number is a fraction: write \"{}%\" or {})", plain(value), plain(value / 100))
+        fail_at(key, fmt::format("expected {} from {} to {}{}, got {}{}", noun(key),
+                                 format_quantity(lo, Unit::ratio, 6), hi_inclusive ? "" : "below ",
+                                 format_quantity(hi, Unit::ratio, 6), format_quantity(value, Unit::ratio, 6),
+                                 hint ? fmt::format(" (a plain number is a fraction: write \"{}%\" or {})",
+                                                    plain(value), plain(value / 100))
                                       : std::string()));
     }
     return value;
@@ -328,7 +353,8 @@ double ObjectReader::fraction(const std::string& key, double value, double lo, d
 
 double ObjectReader::within(const std::string& key, double value, double lo, double hi) const {
     if (!(value >= lo && value <= hi)) {
-        fail_at(key, fmt::format("expected {} from {} to {}, got {}", noun(key), show(key, lo), show(key, hi), show(key, value)));
+        fail_at(key, fmt::format("expected {} from {} to {}, got {}", noun(key), show(key, lo), show(key, hi),
+                                 show(key, value)));
     }
     return value;
 }

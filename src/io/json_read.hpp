@@ -22,8 +22,8 @@ using Json = nlohmann::ordered_json;
 // Where a value came from: the file label for messages and, per field path, the command-line
 // flag that overrode it (so that a bad flag is named as a flag).
 struct Origin {
-    std::string file;                           // "spec.json", "<stdin>", "parts/bipolar.json"
-    std::map<std::string, std::string> flags;   // "supply.voltage" -> "--supply"
+    std::string file;                          // "spec.json", "<stdin>", "parts/bipolar.json"
+    std::map<std::string, std::string> flags;  // "supply.voltage" -> "--supply"
     // A spec made of flags alone: a missing field's message names the flag that gives it,
     // from flag_names (every field the command line can set -> its flag).
     bool flags_only = false;
@@ -97,8 +97,8 @@ private:
     const Origin& origin_;
     std::string path_;
     std::set<std::string> used_;
-    std::map<std::string, Unit> units_;       // unit of each quantity read, for messages
-    std::set<std::string> plain_numbers_;     // keys given as JSON numbers (no unit written)
+    std::map<std::string, Unit> units_;    // unit of each quantity read, for messages
+    std::set<std::string> plain_numbers_;  // keys given as JSON numbers (no unit written)
 
     [[nodiscard]] std::string show(const std::string& key, double value) const;
     [[nodiscard]] std::string noun(const std::string& key) const;

@@ -71,20 +71,21 @@ std::string ascii(std::string_view s) {
 std::string clamp_words(const Spec& spec) {
     const ClampSpec& c = spec.clamp;
     switch (c.type) {
-    case ClampType::diode: return "diode " + display_id(*c.diode);
-    case ClampType::diode_tvs:
-        return fmt::format("diode {} + TVS {} (breakdown {} V to {} V)", display_id(*c.diode), display_id(*c.tvs), num(c.tvs->vbr_min_v),
-                           num(c.tvs->vbr_max_v));
-    case ClampType::diode_zener:
-        return fmt::format("diode {} + zener {} ({} V +/- {} %)", display_id(*c.diode), display_id(*c.zener), num(c.zener->vz_v),
-                           num(100.0 * c.zener->tolerance));
-    case ClampType::diode_resistor:
-        return fmt::format("diode {} + resistor {} ohm", display_id(*c.diode), num(c.resistor_ohm.value_or(0)));
-    case ClampType::none: return "none";
+        case ClampType::diode:
+            return "diode " + display_id(*c.diode);
+        case ClampType::diode_tvs:
+            return fmt::format("diode {} + TVS {} (breakdown {} V to {} V)", display_id(*c.diode), display_id(*c.tvs),
+                               num(c.tvs->vbr_min_v), num(c.tvs->vbr_max_v));
+        case ClampType::diode_zener:
+            return fmt::format("diode {} + zener {} ({} V +/- {} %)", display_id(*c.diode), display_id(*c.zener),
+                               num(c.zener->vz_v), num(100.0 * c.zener->tolerance));
+        case ClampType::diode_resistor:
+            return fmt::format("diode {} + resistor {} ohm", display_id(*c.diode), num(c.resistor_ohm.value_or(0)));
+        case ClampType::none:
+            return "none";
     }
     return "none";
 }
-
 
 // The clamp's own part (zener or TVS) as a diode in breakdown for each copy: BV and a series
 // resistance that give its voltage at the coil current.
@@ -100,16 +101,20 @@ std::string breakdown_model(const std::string& name, const BreakdownModel& m) {
 void check_simulable(const SizingReport& report) {
     const Spec& spec = report.spec;
     if (!spec.coil.inductance_h || !(*spec.coil.inductance_h > 0)) {
-        throw InputError("--netlist: the simulation needs the coil inductance; give coil.inductance (measure the coil "
-                         "with an LCR meter with the armature held in its energised position, or ask the maker)");
+        throw InputError(
+            "--netlist: the simulation needs the coil inductance; give coil.inductance (measure the coil "
+            "with an LCR meter with the armature held in its energised position, or ask the maker)");
     }
     if (spec.clamp.type == ClampType::none || !spec.clamp.diode) {
-        throw InputError("--netlist: the design has no clamp, so the collector voltage is limited only by breakdown and "
-                         "there is no release to simulate; choose clamp.type diode, diode_zener, diode_tvs or diode_resistor");
+        throw InputError(
+            "--netlist: the design has no clamp, so the collector voltage is limited only by breakdown and "
+            "there is no release to simulate; choose clamp.type diode, diode_zener, diode_tvs or diode_resistor");
     }
     if (!spec.array() && !report.sized.r_drive_ohm) {
-        throw InputError("--netlist: no " + std::string(report.resistor.kind) + " could be chosen, so there is no circuit to "
-                         "simulate; give " + (spec.mosfet() ? "gate_resistor.value" : "base_resistor.value") +
+        throw InputError("--netlist: no " + std::string(report.resistor.kind) +
+                         " could be chosen, so there is no circuit to "
+                         "simulate; give " +
+                         (spec.mosfet() ? "gate_resistor.value" : "base_resistor.value") +
                          " to simulate a resistor of your choice");
     }
 }
@@ -209,8 +214,8 @@ void write_header(Writer& w, const Plan& p) {
     w.comment("Corner: the one that gives the longest release.");
     w.comment(fmt::format("  supply at its highest, {} V", num(c.vs_hi_v)));
     w.comment(fmt::format("  coil cold and low: R = {} ohm x (1 - {}) x (1 + 0.00393/K x ({} - {}) C) = {} ohm,",
-                          num(spec.coil.resistance_ohm), num(spec.coil.tolerance), num(c.ta_lo_c), num(spec.coil.reference_temp_c),
-                          num(p.r_cold)));
+                          num(spec.coil.resistance_ohm), num(spec.coil.tolerance), num(c.ta_lo_c),
+                          num(spec.coil.reference_temp_c), num(p.r_cold)));
     w.comment(fmt::format("    L = {} H (energised armature)", num(p.l_h)));
     w.comment(p.drv.comments.front());
     w.comment(fmt::format("  transistor {}; clamp {}", display_id(origin(spec.transistor)), clamp_words(spec)));
@@ -220,33 +225,40 @@ void write_header(Writer& w, const Plan& p) {
     w.comment("");
     w.comment("Models are generic, written by coilfit from the parts table data; they are NOT vendor models.");
     for (std::size_t i = 1; i < p.drv.comments.size(); ++i) w.comment(p.drv.comments[i]);
-    w.comment(fmt::format("  diode {}, peak corner DPEAK: passes through the data's maximum drop {} V at {} A, N = {}", display_id(diode),
-                          num(p.vf_peak), num(p.i0), num(p.d_peak.n)));
-    w.comment("    (N from the slope of the part's forward-voltage points around that current, else the default for its kind).");
-    w.comment(fmt::format("  diode {}, timing corner DLOW: passes through the low drop {} V at the release current {} A,", display_id(diode),
-                          num(p.vf_lo), num(p.i_rel)));
-    w.comment(fmt::format("    N = {}, no series resistance: its drop stays at or above {} V while the current is above release.",
-                          num(p.d_low.n), num(p.vf_lo)));
+    w.comment(fmt::format("  diode {}, peak corner DPEAK: passes through the data's maximum drop {} V at {} A, N = {}",
+                          display_id(diode), num(p.vf_peak), num(p.i0), num(p.d_peak.n)));
+    w.comment(
+        "    (N from the slope of the part's forward-voltage points around that current, else the default for its "
+        "kind).");
+    w.comment(
+        fmt::format("  diode {}, timing corner DLOW: passes through the low drop {} V at the release current {} A,",
+                    display_id(diode), num(p.vf_lo), num(p.i_rel)));
+    w.comment(fmt::format(
+        "    N = {}, no series resistance: its drop stays at or above {} V while the current is above release.",
+        num(p.d_low.n), num(p.vf_lo)));
     if (p.z_peak.bv_v > 0) {
-        w.comment(fmt::format("  clamp part: a diode in breakdown, BV = {} V at {} A (series {} ohm) for the peak copy (ZPEAK),",
-                              num(p.z_peak.bv_v), num(p.z_peak.ibv_a), num(p.z_peak.rs_ohm)));
-        w.comment(fmt::format("    BV = {} V at {} A for the timing copy (ZLOW).", num(p.z_low.bv_v), num(p.z_low.ibv_a)));
+        w.comment(fmt::format(
+            "  clamp part: a diode in breakdown, BV = {} V at {} A (series {} ohm) for the peak copy (ZPEAK),",
+            num(p.z_peak.bv_v), num(p.z_peak.ibv_a), num(p.z_peak.rs_ohm)));
+        w.comment(
+            fmt::format("    BV = {} V at {} A for the timing copy (ZLOW).", num(p.z_low.bv_v), num(p.z_low.ibv_a)));
     }
     if (spec.clamp.type == ClampType::diode_resistor) {
-        w.comment(fmt::format("  clamp resistor {} ohm in the peak copy, {} ohm in the timing copy (its tolerance).", num(p.rs_peak),
-                              num(p.rs_low)));
+        w.comment(fmt::format("  clamp resistor {} ohm in the peak copy, {} ohm in the timing copy (its tolerance).",
+                              num(p.rs_peak), num(p.rs_low)));
     }
     w.comment("");
     w.comment("The report predicts (ngspice prints the same names; the report should not be below the simulation");
-    w.comment("by more than 1 %, and is expected a little above it: it takes constant clamp voltages at their corners):");
+    w.comment(
+        "by more than 1 %, and is expected a little above it: it takes constant clamp voltages at their corners):");
     w.comment(fmt::format("  coil_current_on = {} A   (supply / cold coil resistance)", num(p.i0)));
     w.comment(fmt::format("  peak_collector  = {} V", num(p.k->peak_collector_v)));
     if (p.k->release_time_s > 0) {
-        w.comment(fmt::format("  release_time    = {} s   (until the coil current falls to {} A)", secs(p.k->release_time_s),
-                              num(p.i_rel)));
+        w.comment(fmt::format("  release_time    = {} s   (until the coil current falls to {} A)",
+                              secs(p.k->release_time_s), num(p.i_rel)));
     }
-    w.comment(fmt::format("Pin: high at {} s, low at {} s (the turn-off instant); edges {} s.", secs(pin_delay_s), secs(p.t_off),
-                          num(pin_edge_s)));
+    w.comment(fmt::format("Pin: high at {} s, low at {} s (the turn-off instant); edges {} s.", secs(pin_delay_s),
+                          secs(p.t_off), num(pin_edge_s)));
     w.line("");
 }
 
@@ -266,17 +278,20 @@ void write_circuit(Writer& w, const Plan& p) {
         w.line(fmt::format("lcoil_{0} mid_{0} c_{0} {1}", copy, num(p.l_h)));
         const std::string dmodel = std::string(peak ? "dpeak" : "dlow") + held;
         switch (spec.clamp.type) {
-        case ClampType::diode: w.line(fmt::format("d_{0} c_{0} vs {1}", copy, dmodel)); break;
-        case ClampType::diode_zener:
-        case ClampType::diode_tvs:
-            w.line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
-            w.line(fmt::format("dz_{0} vs k_{0} {1}{2}", copy, peak ? "zpeak" : "zlow", held));
-            break;
-        case ClampType::diode_resistor:
-            w.line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
-            w.line(fmt::format("rs_{0} k_{0} vs {1}", copy, num(peak ? p.rs_peak : p.rs_low)));
-            break;
-        case ClampType::none: break;
+            case ClampType::diode:
+                w.line(fmt::format("d_{0} c_{0} vs {1}", copy, dmodel));
+                break;
+            case ClampType::diode_zener:
+            case ClampType::diode_tvs:
+                w.line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
+                w.line(fmt::format("dz_{0} vs k_{0} {1}{2}", copy, peak ? "zpeak" : "zlow", held));
+                break;
+            case ClampType::diode_resistor:
+                w.line(fmt::format("d_{0} c_{0} k_{0} {1}", copy, dmodel));
+                w.line(fmt::format("rs_{0} k_{0} vs {1}", copy, num(peak ? p.rs_peak : p.rs_low)));
+                break;
+            case ClampType::none:
+                break;
         }
     }
     w.line("");
@@ -297,7 +312,8 @@ void write_models_and_analysis(Writer& w, const Plan& p) {
     w.line(fmt::format(".tran {} {} 0 {}", secs(p.t_max), secs(p.t_stop), secs(p.t_max)));
     w.line(fmt::format(".meas tran {} find i(vsense_r) at={}", meas_coil_current, secs(p.t_off)));
     w.line(fmt::format(".meas tran {} max v(c_p) from={} to={}", meas_peak_collector, secs(p.t_off), secs(p.t_stop)));
-    w.line(fmt::format(".meas tran {} trig at={} targ i(vsense_r) val={} fall=1", meas_release_time, secs(p.t_off), num(p.i_rel)));
+    w.line(fmt::format(".meas tran {} trig at={} targ i(vsense_r) val={} fall=1", meas_release_time, secs(p.t_off),
+                       num(p.i_rel)));
     // An array channel's on-voltage is not negligible (a Vbe and more): measured for the report's Vce(sat).
     if (p.spec->array()) w.line(fmt::format(".meas tran {} find v(c_r) at={}", meas_output_on, secs(p.t_off)));
     w.line(".end");

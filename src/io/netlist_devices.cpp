@@ -47,7 +47,8 @@ DriverNetlist bipolar_netlist(const SizingReport& report, bool device_temperatur
     DriverNetlist d;
     // Drive at its weakest: pin at its low VDD behind its output resistance, Rb at +tolerance.
     d.drive_v = c.vdd_lo_v;
-    const double r_out = std::max(std::get<BipolarFigures>(e.drive).pin_r_out_ohm, 1e-3);  // SPICE resistors must not be zero
+    const double r_out =
+        std::max(std::get<BipolarFigures>(e.drive).pin_r_out_ohm, 1e-3);  // SPICE resistors must not be zero
     const double rb = *sized.r_drive_ohm * c.rb_hi_factor;
     // Generic NPN: forward gain the part's minimum at I0; the saturation voltage kept low.
     // With device_temperature, the 25 °C gain and SPICE's own law BF(T) = BF (T/TNOM)^XTB.
@@ -57,33 +58,45 @@ DriverNetlist bipolar_netlist(const SizingReport& report, bool device_temperatur
     // Intrinsic Gummel-Poon saturation voltage at forced gain bf_f:
     // Vce(sat) = Vt ln[(1/alpha_R + bf_f/BR) / (1 - bf_f/BF)], alpha_R = BR/(1+BR) (Ebers-Moll).
     const double forced = f.saturates ? std::min(f.forced_gain_worst, 0.99 * bf) : 0.5 * bf;
-    const double vce_model = vt_v * std::log(((1.0 + npn_br) / npn_br + forced / npn_br) / (1.0 - forced / bf)) + rc * i0;
-    d.comments.push_back(fmt::format("  base drive at its weakest: pin {} V (low VDD) behind {} ohm, base resistor {} ohm at +{} % = {} ohm{}",
-                                     num(c.vdd_lo_v), num(r_out), num(*sized.r_drive_ohm), num(100.0 * (c.rb_hi_factor - 1.0)), num(rb),
-                                     spec.pulldown_ohm ? fmt::format(", pull-down {} ohm", num(*spec.pulldown_ohm)) : std::string()));
-    d.comments.push_back(fmt::format("  NPN: Gummel-Poon, BF = {} (the part's minimum hFE at {} A), IS = {} A, BR = {}, RC = {} ohm.", num(bf),
-                                     num(i0), num(npn_is_a), num(npn_br), num(rc)));
-    d.comments.push_back(fmt::format("    Vce(sat) of the model at this drive is about {:.3g} V ({:.2g} % of the supply); the data's maximum is {} V.",
-                                     vce_model, 100.0 * vce_model / c.vs_hi_v, num(f.vce_sat_v)));
-    d.comments.emplace_back("    The report's highest coil current neglects Vce(sat) (it only lowers the current), so the model keeps");
-    d.comments.emplace_back("    it low on purpose (a generous BR, and RC giving 5 % of the data's maximum) and the simulated current");
-    d.comments.push_back(fmt::format("    checks that figure. For the current at the data's maximum Vce(sat) set RC to about {:.3g} ohm.",
-                                     f.vce_sat_v / i0));
+    const double vce_model =
+        vt_v * std::log(((1.0 + npn_br) / npn_br + forced / npn_br) / (1.0 - forced / bf)) + rc * i0;
+    d.comments.push_back(fmt::format(
+        "  base drive at its weakest: pin {} V (low VDD) behind {} ohm, base resistor {} ohm at +{} % = {} ohm{}",
+        num(c.vdd_lo_v), num(r_out), num(*sized.r_drive_ohm), num(100.0 * (c.rb_hi_factor - 1.0)), num(rb),
+        spec.pulldown_ohm ? fmt::format(", pull-down {} ohm", num(*spec.pulldown_ohm)) : std::string()));
+    d.comments.push_back(
+        fmt::format("  NPN: Gummel-Poon, BF = {} (the part's minimum hFE at {} A), IS = {} A, BR = {}, RC = {} ohm.",
+                    num(bf), num(i0), num(npn_is_a), num(npn_br), num(rc)));
+    d.comments.push_back(
+        fmt::format("    Vce(sat) of the model at this drive is about {:.3g} V ({:.2g} % of the supply); the data's "
+                    "maximum is {} V.",
+                    vce_model, 100.0 * vce_model / c.vs_hi_v, num(f.vce_sat_v)));
+    d.comments.emplace_back(
+        "    The report's highest coil current neglects Vce(sat) (it only lowers the current), so the model keeps");
+    d.comments.emplace_back(
+        "    it low on purpose (a generous BR, and RC giving 5 % of the data's maximum) and the simulated current");
+    d.comments.push_back(fmt::format(
+        "    checks that figure. For the current at the data's maximum Vce(sat) set RC to about {:.3g} ohm.",
+        f.vce_sat_v / i0));
     if (tr.kind == BipolarKind::darlington) {
-        d.comments.emplace_back("    The Darlington is modelled as one NPN with the pair's gain; its higher Vce(sat) and Vbe are not.");
+        d.comments.emplace_back(
+            "    The Darlington is modelled as one NPN with the pair's gain; its higher Vce(sat) and Vbe are not.");
     }
     d.element_templates.push_back("rout_{0} pin pin_{0} " + num(r_out));
     d.element_templates.push_back("rb_{0} pin_{0} b_{0} " + num(rb));
     if (spec.pulldown_ohm) d.element_templates.push_back("rbe_{0} b_{0} 0 " + num(*spec.pulldown_ohm));
     d.element_templates.emplace_back("q_{0} c_{0} b_{0} 0 qdrv");
     if (device_temperature) {
-        d.comments.push_back(fmt::format("    At the cold corner's {} C: BF is the 25 C gain with XTB = {} and TNOM = 25 C (SPICE's gain law",
-                                         num(sized.conditions.ta_lo_c), num(xtb)));
-        d.comments.emplace_back("    BF (T/TNOM)^XTB, the method's exponent); the clamp diodes keep 27 C (instance temp).");
-        d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={} xtb={} tnom=25)", num(npn_is_a), num(bf), num(npn_br),
-                                       num(rc), num(xtb)));
+        d.comments.push_back(fmt::format(
+            "    At the cold corner's {} C: BF is the 25 C gain with XTB = {} and TNOM = 25 C (SPICE's gain law",
+            num(sized.conditions.ta_lo_c), num(xtb)));
+        d.comments.emplace_back(
+            "    BF (T/TNOM)^XTB, the method's exponent); the clamp diodes keep 27 C (instance temp).");
+        d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={} xtb={} tnom=25)", num(npn_is_a),
+                                       num(bf), num(npn_br), num(rc), num(xtb)));
     } else {
-        d.models.push_back(fmt::format(".model qdrv npn(is={} bf={} br={} rc={})", num(npn_is_a), num(bf), num(npn_br), num(rc)));
+        d.models.push_back(
+            fmt::format(".model qdrv npn(is={} bf={} br={} rc={})", num(npn_is_a), num(bf), num(npn_br), num(rc)));
     }
     return d;
 }
@@ -111,14 +124,17 @@ DriverNetlist mosfet_netlist(const SizingReport& report) {
     const double vto = std::max(0.1, std::min(m.vgs_th_max_v, vgs - 4.0 * i0 * rds));
     const double vov = std::max(vgs - vto, 1e-3);
     const double kp = 1.0 / (rds * std::max(vov - 0.5 * i0 * rds, 0.25 * vov));
-    d.comments.push_back(fmt::format("  gate drive at its weakest: pin {} V (low VDD) behind {} ohm, gate resistor {} ohm at +{} % = {} ohm,",
-                                     num(c.vdd_lo_v), num(r_out), num(*sized.r_drive_ohm), num(100.0 * (c.rb_hi_factor - 1.0)), num(rg)));
-    d.comments.push_back(fmt::format("    pull-down {} ohm at -{} % = {} ohm: the gate settles at {} V", num(fig.pulldown_ohm),
-                                     num(100.0 * (1.0 - c.rb_lo_factor)), num(rgs), num(vgs)));
-    d.comments.push_back(fmt::format("  NMOS: level 1, VTO = {} V, KP = {} A/V^2 (W = L): its on-resistance at {} V and {} A is {} ohm,",
-                                     num(vto), num(kp), num(vgs), num(i0), num(rds)));
-    d.comments.push_back(fmt::format("    the Rds(on) maximum the report uses ({} V point of {}); no capacitances, no body diode in the way.",
-                                     num(m.rds_on[static_cast<std::size_t>(std::max(f.rds_point, 0))].vgs_v), display_id(m)));
+    d.comments.push_back(fmt::format(
+        "  gate drive at its weakest: pin {} V (low VDD) behind {} ohm, gate resistor {} ohm at +{} % = {} ohm,",
+        num(c.vdd_lo_v), num(r_out), num(*sized.r_drive_ohm), num(100.0 * (c.rb_hi_factor - 1.0)), num(rg)));
+    d.comments.push_back(fmt::format("    pull-down {} ohm at -{} % = {} ohm: the gate settles at {} V",
+                                     num(fig.pulldown_ohm), num(100.0 * (1.0 - c.rb_lo_factor)), num(rgs), num(vgs)));
+    d.comments.push_back(
+        fmt::format("  NMOS: level 1, VTO = {} V, KP = {} A/V^2 (W = L): its on-resistance at {} V and {} A is {} ohm,",
+                    num(vto), num(kp), num(vgs), num(i0), num(rds)));
+    d.comments.push_back(fmt::format(
+        "    the Rds(on) maximum the report uses ({} V point of {}); no capacitances, no body diode in the way.",
+        num(m.rds_on[static_cast<std::size_t>(std::max(f.rds_point, 0))].vgs_v), display_id(m)));
     d.element_templates.push_back("rout_{0} pin pin_{0} " + num(r_out));
     d.element_templates.push_back("rg_{0} pin_{0} g_{0} " + num(rg));
     d.element_templates.push_back("rgs_{0} g_{0} 0 " + num(rgs));
@@ -155,23 +171,31 @@ DriverNetlist array_netlist(const SizingReport& report) {
     const double r_out = pin_r_out(spec);
     const double t_in = a.input_resistor_tolerance.value_or(defaults::array_input_tolerance);
     const double r_in = a.input_resistor_ohm * (1.0 + t_in);
-    d.comments.push_back(fmt::format("  input drive at its weakest: pin {} V (low VDD) behind {} ohm, the array's input resistor {} ohm at +{} % = {} ohm",
-                                     num(c.vdd_lo_v), num(r_out), num(a.input_resistor_ohm), num(100.0 * t_in), num(r_in)));
+    d.comments.push_back(
+        fmt::format("  input drive at its weakest: pin {} V (low VDD) behind {} ohm, the array's input resistor {} ohm "
+                    "at +{} % = {} ohm",
+                    num(c.vdd_lo_v), num(r_out), num(a.input_resistor_ohm), num(100.0 * t_in), num(r_in)));
     d.element_templates.push_back("rout_{0} pin pin_{0} " + num(r_out));
     d.element_templates.push_back("rin_{0} pin_{0} b_{0} " + num(r_in));
     if (a.structure == ArrayStructure::darlington) {
-        d.comments.push_back(fmt::format("  array channel {}: a Darlington pair, each NPN Gummel-Poon IS = {} A, BF = {}, BR = {}; {} ohm from the",
-                                         display_id(a), num(npn_is_a), num(array_bf), num(array_br), num(array_r_be1_ohm)));
-        d.comments.push_back(fmt::format("    first base to its emitter and {} ohm across the output transistor's base-emitter (typical of the",
-                                         num(array_r_be2_ohm)));
-        d.comments.emplace_back("    class, from memory). Its on-voltage is a Vbe plus the first transistor's Vce(sat): it must stay at or");
-        d.comments.push_back(fmt::format("    below the data's maximum Vce(sat) {} V at {} A, which the report takes off the coil's voltage.",
-                                         num(f.vce_sat.value), num(i0)));
+        d.comments.push_back(fmt::format(
+            "  array channel {}: a Darlington pair, each NPN Gummel-Poon IS = {} A, BF = {}, BR = {}; {} ohm from the",
+            display_id(a), num(npn_is_a), num(array_bf), num(array_br), num(array_r_be1_ohm)));
+        d.comments.push_back(fmt::format(
+            "    first base to its emitter and {} ohm across the output transistor's base-emitter (typical of the",
+            num(array_r_be2_ohm)));
+        d.comments.emplace_back(
+            "    class, from memory). Its on-voltage is a Vbe plus the first transistor's Vce(sat): it must stay at "
+            "or");
+        d.comments.push_back(fmt::format(
+            "    below the data's maximum Vce(sat) {} V at {} A, which the report takes off the coil's voltage.",
+            num(f.vce_sat.value), num(i0)));
         d.element_templates.push_back("rbe1_{0} b_{0} e1_{0} " + num(array_r_be1_ohm));
         d.element_templates.emplace_back("q1_{0} c_{0} b_{0} e1_{0} qarr");
         d.element_templates.push_back("rbe2_{0} e1_{0} 0 " + num(array_r_be2_ohm));
         d.element_templates.emplace_back("q2_{0} c_{0} e1_{0} 0 qarr");
-        d.models.push_back(fmt::format(".model qarr npn(is={} bf={} br={})", num(npn_is_a), num(array_bf), num(array_br)));
+        d.models.push_back(
+            fmt::format(".model qarr npn(is={} bf={} br={})", num(npn_is_a), num(array_bf), num(array_br)));
         return d;
     }
     // The MOSFET class: the gate behind the input resistor (no gate current in a DC model), a
@@ -183,9 +207,11 @@ DriverNetlist array_netlist(const SizingReport& report) {
     const double vto = std::max(0.1, std::min(vgs - 1.0, vgs - 4.0 * i0 * rds));
     const double vov = std::max(vgs - vto, 1e-3);
     const double kp = 1.0 / (rds * std::max(vov - 0.5 * i0 * rds, 0.25 * vov));
-    d.comments.push_back(fmt::format("  array channel {}: a level-1 NMOS, VTO = {} V, KP = {} A/V^2 (W = L): {} ohm on at {} V and {} A,",
-                                     display_id(a), num(vto), num(kp), num(rds), num(vgs), num(i0)));
-    d.comments.push_back(fmt::format("    the data's maximum on-voltage {} V at that current; no capacitances.", num(f.vce_sat.value)));
+    d.comments.push_back(fmt::format(
+        "  array channel {}: a level-1 NMOS, VTO = {} V, KP = {} A/V^2 (W = L): {} ohm on at {} V and {} A,",
+        display_id(a), num(vto), num(kp), num(rds), num(vgs), num(i0)));
+    d.comments.push_back(
+        fmt::format("    the data's maximum on-voltage {} V at that current; no capacitances.", num(f.vce_sat.value)));
     d.element_templates.emplace_back("m_{0} c_{0} b_{0} 0 0 narr l=1u w=1u");
     d.models.push_back(fmt::format(".model narr nmos(level=1 vto={} kp={} lambda=0)", num(vto), num(kp)));
     return d;

@@ -26,7 +26,8 @@ std::string shown(const std::string& path) { return escape_text(path, 4096); }
 // "permission denied": the system's words for errno, in lower case as in our messages.
 std::string reason(int err) {
     std::string s = std::strerror(err);
-    if (!s.empty() && s[0] >= 'A' && s[0] <= 'Z' && (s.size() < 2 || !(s[1] >= 'A' && s[1] <= 'Z'))) s[0] = static_cast<char>(s[0] - 'A' + 'a');
+    if (!s.empty() && s[0] >= 'A' && s[0] <= 'Z' && (s.size() < 2 || !(s[1] >= 'A' && s[1] <= 'Z')))
+        s[0] = static_cast<char>(s[0] - 'A' + 'a');
     return s;
 }
 
@@ -64,7 +65,7 @@ void register_temp(const std::string& path) {
     std::atomic_signal_fence(std::memory_order_seq_cst);
     temp_set = 1;
     for (int i = 0; i < 3; ++i) {
-        struct sigaction sa{};
+        struct sigaction sa {};
         sa.sa_handler = remove_temp_and_die;
         sigemptyset(&sa.sa_mask);
         ::sigaction(caught[i], &sa, &previous[i]);
@@ -102,7 +103,7 @@ bool is_stdout(const std::string& path) { return path == "-"; }
 
 // The identity of an existing file (device and inode, links followed), else nothing.
 std::optional<std::pair<dev_t, ino_t>> identity(const std::string& path) {
-    struct stat st{};
+    struct stat st {};
     if (is_stdout(path)) {
         if (::fstat(STDOUT_FILENO, &st) != 0) return std::nullopt;
     } else if (::stat(path.c_str(), &st) != 0) {
@@ -144,7 +145,7 @@ bool proc_like(const std::string& p) { return p.rfind("/proc/", 0) == 0 || p.rfi
 LinkTarget link_target(const std::string& path) {
     LinkTarget t{path, proc_like(path)};
     for (int hops = 0; hops <= 40; ++hops) {
-        struct stat st{};
+        struct stat st {};
         if (::lstat(t.path.c_str(), &st) != 0 || !S_ISLNK(st.st_mode)) return t;
         std::error_code ec;
         const fs::path to = fs::read_symlink(t.path, ec);
@@ -218,7 +219,8 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
         fd = ::mkstemp(tmpl.data());  // O_CREAT | O_EXCL, mode 0600: no planted link is followed
         if (fd < 0) {
             const fs::path dir = t.parent_path().empty() ? fs::path(".") : t.parent_path();
-            throw InputError(shown(shown_as) + ": cannot write here (" + shown(dir.string()) + ": " + reason(errno) + ")");
+            throw InputError(shown(shown_as) + ": cannot write here (" + shown(dir.string()) + ": " + reason(errno) +
+                             ")");
         }
         register_temp(tmpl);
     }
@@ -257,7 +259,8 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
             const int err = errno;
             ::unlink(tmpl.c_str());
             clear_temp();
-            throw InputError(shown(shown_as) + ": cannot replace the file: " + reason(err) + "; the file was not changed");
+            throw InputError(shown(shown_as) + ": cannot replace the file: " + reason(err) +
+                             "; the file was not changed");
         }
         clear_temp();
     }
@@ -266,7 +269,7 @@ void replace_atomically(const std::string& shown_as, const std::string& target, 
 
 void check_one(const OutputTarget& out, const RunInputs& inputs) {
     if (out.path.empty() || is_stdout(out.path)) return;
-    struct stat st{};
+    struct stat st {};
     if (::stat(out.path.c_str(), &st) == 0 && S_ISDIR(st.st_mode)) {
         throw InputError(out.flag + ": " + shown(out.path) + " is a folder; give a file name");
     }
@@ -288,8 +291,8 @@ void check_outputs(const std::vector<OutputTarget>& outputs, const RunInputs& in
         for (std::size_t k = 0; k < i; ++k) {
             if (outputs[i].path.empty() || outputs[k].path.empty()) continue;
             if (same_file(outputs[i].path, outputs[k].path)) {
-                throw InputError(outputs[i].flag + ": " + shown(outputs[i].path) + " is also the file of " + outputs[k].flag +
-                                 "; give each output its own file");
+                throw InputError(outputs[i].flag + ": " + shown(outputs[i].path) + " is also the file of " +
+                                 outputs[k].flag + "; give each output its own file");
             }
         }
     }
@@ -300,7 +303,7 @@ void write_output(const OutputTarget& target, std::string_view content, const Ru
     const std::string& path = target.path;
     if (path.empty()) throw InputError(target.flag + ": expected a file name, got an empty text");
     if (is_stdout(path)) return write_stdout(content);
-    struct stat st{};
+    struct stat st {};
     if (::stat(path.c_str(), &st) != 0) {
         const int err = errno;
         if (err == ELOOP) throw InputError(shown(path) + ": a symbolic link loop; give a file name");

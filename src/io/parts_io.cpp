@@ -5,8 +5,8 @@
 
 #include <algorithm>
 #include <cerrno>
-#include <cstring>
 #include <cstdlib>
+#include <cstring>
 #include <filesystem>
 #include <map>
 
@@ -25,8 +25,9 @@ constexpr std::size_t max_table_bytes = 8U << 20U;
 constexpr std::size_t max_folder_bytes = 32U << 20U;
 
 std::string folder_too_large(const std::string& shown) {
-    return fmt::format("{}: the parts files of this folder are larger than {} bytes together; this is not a coilfit parts table",
-                       shown, max_folder_bytes);
+    return fmt::format(
+        "{}: the parts files of this folder are larger than {} bytes together; this is not a coilfit parts table",
+        shown, max_folder_bytes);
 }
 
 // What is wrong with an entry, in words: "a symbolic link loop", "cannot be read (permission denied)".
@@ -56,15 +57,19 @@ std::vector<FolderFile> folder_files(const std::string& dir) {
         if (p.extension() != ".json") continue;
         const std::string name = p.string();
         const std::string shown = printable(name, 4096);
-        struct stat st{};
+        struct stat st {};
         if (::stat(name.c_str(), &st) != 0) {
             const int err = errno;
-            if (err == ENOENT) throw InputError(shown + ": a symbolic link to nothing in the parts folder; remove it or fix its target");
+            if (err == ENOENT)
+                throw InputError(shown +
+                                 ": a symbolic link to nothing in the parts folder; remove it or fix its target");
             throw InputError(shown + ": " + entry_problem(err) + " in the parts folder");
         }
-        if (S_ISDIR(st.st_mode)) throw InputError(shown + ": a folder named *.json in the parts folder; parts files are files");
+        if (S_ISDIR(st.st_mode))
+            throw InputError(shown + ": a folder named *.json in the parts folder; parts files are files");
         if (!S_ISREG(st.st_mode)) throw InputError(shown + ": not a regular file, in the parts folder");
-        if (::access(name.c_str(), R_OK) != 0) throw InputError(shown + ": " + entry_problem(errno) + " in the parts folder");
+        if (::access(name.c_str(), R_OK) != 0)
+            throw InputError(shown + ": " + entry_problem(errno) + " in the parts folder");
         files.push_back({name, static_cast<std::uintmax_t>(st.st_size)});
     }
     if (ec) throw InputError(printable(dir, 4096) + ": cannot list the folder (" + entry_problem(ec.value()) + ")");
@@ -75,8 +80,8 @@ std::vector<FolderFile> folder_files(const std::string& dir) {
 }  // namespace
 
 const Preset* PartsTable::find_preset(std::string_view kind, std::string_view id) const {
-    const auto it = std::find_if(presets.begin(), presets.end(),
-                                 [&](const Preset& p) { return p.kind == kind && p.id == id; });
+    const auto it =
+        std::find_if(presets.begin(), presets.end(), [&](const Preset& p) { return p.kind == kind && p.id == id; });
     return it == presets.end() ? nullptr : &*it;
 }
 
@@ -97,7 +102,8 @@ namespace {
 constexpr std::string_view known_kinds =
     "npn, darlington, nmos, array, rectifier, fast, signal, schottky, zener, tvs, coil, pin, relay or contactor";
 
-Preset read_preset(ObjectReader& r, const Json& record, const std::string& kind, const Origin& origin, const std::string& path) {
+Preset read_preset(ObjectReader& r, const Json& record, const std::string& kind, const Origin& origin,
+                   const std::string& path) {
     Preset p;
     p.id = records::read_id(r);
     p.kind = kind;
@@ -125,10 +131,12 @@ std::string read_record(ObjectReader& r, const Json& record, const std::string& 
     if (kind == "npn" || kind == "darlington") return cat.bipolars.emplace_back(read_bipolar(r)).id;
     if (kind == "nmos") return cat.mosfets.emplace_back(read_mosfet(r)).id;
     if (kind == "array") return cat.arrays.emplace_back(read_array(r)).id;
-    if (kind == "rectifier" || kind == "fast" || kind == "signal" || kind == "schottky") return cat.diodes.emplace_back(read_diode(r)).id;
+    if (kind == "rectifier" || kind == "fast" || kind == "signal" || kind == "schottky")
+        return cat.diodes.emplace_back(read_diode(r)).id;
     if (kind == "zener") return cat.zeners.emplace_back(read_zener(r)).id;
     if (kind == "tvs") return cat.tvs.emplace_back(read_tvs(r)).id;
-    if (kind == "coil" || kind == "pin") return table.presets.emplace_back(read_preset(r, record, kind, origin, path)).id;
+    if (kind == "coil" || kind == "pin")
+        return table.presets.emplace_back(read_preset(r, record, kind, origin, path)).id;
     if (kind == "relay" || kind == "contactor") return table.relays.emplace_back(read_relay(r, record)).record.id;
     r.fail_at("kind", fmt::format("unknown kind \"{}\"; expected {}", printable(kind), known_kinds));
 }
@@ -177,10 +185,10 @@ PartsTable load_parts(const std::string& path) {
     PartsTable table;
     const std::string shown = printable(path, 4096);
     if (path.empty()) throw InputError("the parts table: expected a file or folder name, got an empty text");
-    struct stat st{};
+    struct stat st {};
     if (::stat(path.c_str(), &st) != 0) {
         const int err = errno;
-        struct stat lst{};
+        struct stat lst {};
         if (err == ENOENT && ::lstat(path.c_str(), &lst) == 0 && S_ISLNK(lst.st_mode)) {
             throw InputError(shown + ": a symbolic link to nothing (its target does not exist)");
         }

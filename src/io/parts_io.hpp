@@ -16,7 +16,7 @@ struct Preset {
     std::string kind;  // "coil" | "pin"
     std::string description;
     std::string source;
-    Json fields;       // the spec fields it supplies, as written
+    Json fields;  // the spec fields it supplies, as written
 };
 
 struct PartsTable {

@@ -7,13 +7,17 @@ namespace {
 using namespace records;
 
 std::vector<PulsePoint> read_pulse(ObjectReader& r) {
-    auto pts = read_points<PulsePoint>(r, "pulse", [](ObjectReader& pr) {
-        PulsePoint p;
-        p.width_s = pr.within("width", pr.positive("width", pr.required("width", Unit::second)), 1e-7, 10.0);
-        p.power_w = pr.within("power", pr.positive("power", pr.required("power", Unit::watt)), 1e-3, 1e6);
-        return p;
-    }, false);
-    check_sorted(r, "pulse", pts, [](const PulsePoint& p) { return p.width_s; }, "width");
+    auto pts = read_points<PulsePoint>(
+        r, "pulse",
+        [](ObjectReader& pr) {
+            PulsePoint p;
+            p.width_s = pr.within("width", pr.positive("width", pr.required("width", Unit::second)), 1e-7, 10.0);
+            p.power_w = pr.within("power", pr.positive("power", pr.required("power", Unit::watt)), 1e-3, 1e6);
+            return p;
+        },
+        false);
+    check_sorted(
+        r, "pulse", pts, [](const PulsePoint& p) { return p.width_s; }, "width");
     return pts;
 }
 
@@ -23,11 +27,17 @@ Diode read_diode(ObjectReader& r, RecordPlace place) {
     Diode d;
     d.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind == "rectifier") d.kind = DiodeKind::rectifier;
-    else if (kind == "fast") d.kind = DiodeKind::fast;
-    else if (kind == "signal") d.kind = DiodeKind::signal;
-    else if (kind == "schottky") d.kind = DiodeKind::schottky;
-    else r.fail_at("kind", "expected \"rectifier\", \"fast\", \"signal\" or \"schottky\", got \"" + printable(kind) + "\"");
+    if (kind == "rectifier")
+        d.kind = DiodeKind::rectifier;
+    else if (kind == "fast")
+        d.kind = DiodeKind::fast;
+    else if (kind == "signal")
+        d.kind = DiodeKind::signal;
+    else if (kind == "schottky")
+        d.kind = DiodeKind::schottky;
+    else
+        r.fail_at("kind",
+                  "expected \"rectifier\", \"fast\", \"signal\" or \"schottky\", got \"" + printable(kind) + "\"");
     d.vrrm_v = voltage(r, "vrrm", 1.0, 1e4);
     d.if_avg_a = r.within("if_avg", r.positive("if_avg", r.required("if_avg", Unit::ampere)), 1e-6, 1e3);
     if (auto v = r.quantity("ifrm", Unit::ampere)) d.ifrm_a = current(r, "ifrm", *v);
@@ -55,7 +65,8 @@ Zener read_zener(ObjectReader& r, RecordPlace place) {
         if (!relative) {
             z.vz_tempco_v_per_k = r.within("vz_tempco", *r.quantity("vz_tempco", Unit::volt_per_kelvin), -1.0, 1.0);
         } else {
-            z.vz_tempco_v_per_k = r.within("vz_tempco", *r.quantity("vz_tempco", Unit::per_kelvin), -0.01, 0.01) * z.vz_v;
+            z.vz_tempco_v_per_k =
+                r.within("vz_tempco", *r.quantity("vz_tempco", Unit::per_kelvin), -0.01, 0.01) * z.vz_v;
         }
     }
     z.pulse = read_pulse(r);
@@ -76,19 +87,22 @@ Tvs read_tvs(ObjectReader& r, RecordPlace place) {
         t.vbr_min_v = voltage(br, "min", 1.0, 1000.0);
         t.vbr_max_v = voltage(br, "max", 1.0, 1000.0);
         if (t.vbr_max_v < t.vbr_min_v) {
-            br.fail_at("max", fmt::format("expected at least vbr.min {}, got {}", format_quantity(t.vbr_min_v, Unit::volt, 6),
-                                          format_quantity(t.vbr_max_v, Unit::volt, 6)));
+            br.fail_at("max",
+                       fmt::format("expected at least vbr.min {}, got {}", format_quantity(t.vbr_min_v, Unit::volt, 6),
+                                   format_quantity(t.vbr_max_v, Unit::volt, 6)));
         }
         br.finish();
     }
     t.vc_v = voltage(r, "vc", 1.0, 2000.0);
     if (t.vc_v < t.vbr_max_v) {
-        r.fail_at("vc", fmt::format("expected at least vbr.max {} (the clamping voltage at Ipp), got {}",
-                                    format_quantity(t.vbr_max_v, Unit::volt, 6), format_quantity(t.vc_v, Unit::volt, 6)));
+        r.fail_at("vc",
+                  fmt::format("expected at least vbr.max {} (the clamping voltage at Ipp), got {}",
+                              format_quantity(t.vbr_max_v, Unit::volt, 6), format_quantity(t.vc_v, Unit::volt, 6)));
     }
     t.ipp_a = current(r, "ipp", r.required("ipp", Unit::ampere));
     t.ppk_w = r.within("ppk", r.positive("ppk", r.required("ppk", Unit::watt)), 1.0, 1e6);
-    if (auto v = r.quantity("ppk_width", Unit::second)) t.ppk_width_s = r.within("ppk_width", r.positive("ppk_width", *v), 1e-7, 1.0);
+    if (auto v = r.quantity("ppk_width", Unit::second))
+        t.ppk_width_s = r.within("ppk_width", r.positive("ppk_width", *v), 1e-7, 1.0);
     read_origin(r, t, place);
     return t;
 }

@@ -19,7 +19,8 @@ std::vector<Point> read_points(ObjectReader& r, const std::string& key, ReadPoin
         if (required) r.fail_at(key, "missing; expected a list of points");
         return out;
     }
-    if (!list->is_array() || list->empty()) r.fail_at(key, "expected a list of one or more points, got " + describe(*list));
+    if (!list->is_array() || list->empty())
+        r.fail_at(key, "expected a list of one or more points, got " + describe(*list));
     if (list->size() > 64) r.fail_at(key, "more than 64 points");
     for (std::size_t i = 0; i < list->size(); ++i) {
         ObjectReader pr((*list)[i], r.origin(), r.path_of(key) + "[" + std::to_string(i) + "]");
@@ -34,7 +35,8 @@ void check_sorted(const ObjectReader& r, const std::string& key, const std::vect
                   const char* what = "current") {
     for (std::size_t i = 1; i < pts.size(); ++i) {
         if (!(x(pts[i]) > x(pts[i - 1]))) {
-            r.fail_at(key + "[" + std::to_string(i) + "]", fmt::format("points must be in order of increasing {}", what));
+            r.fail_at(key + "[" + std::to_string(i) + "]",
+                      fmt::format("points must be in order of increasing {}", what));
         }
     }
 }

@@ -14,8 +14,9 @@ SaturationPoint read_saturation(ObjectReader& p) {
     s.ib_a = current(p, "ib", p.required("ib", Unit::ampere));
     s.v_max = p.within("max", p.positive("max", p.required("max", Unit::volt)), 0.001, 10.0);
     if (s.ib_a > s.ic_a) {
-        p.fail_at("ib", fmt::format("expected a base current at most the test's ic {} (a saturation test condition), got {}",
-                                    format_quantity(s.ic_a, Unit::ampere, 6), format_quantity(s.ib_a, Unit::ampere, 6)));
+        p.fail_at("ib",
+                  fmt::format("expected a base current at most the test's ic {} (a saturation test condition), got {}",
+                              format_quantity(s.ic_a, Unit::ampere, 6), format_quantity(s.ib_a, Unit::ampere, 6)));
     }
     return s;
 }
@@ -29,7 +30,8 @@ GainPoint read_gain(ObjectReader& pr) {
         g.hfe_typ = pr.within("typ", *typ, 1.0, 1e6);
         if (*typ < g.hfe_min) {
             pr.fail_at("typ", fmt::format("expected a typical gain of at least the minimum {}, got {}",
-                                          format_quantity(g.hfe_min, Unit::number, 6), format_quantity(*typ, Unit::number, 6)));
+                                          format_quantity(g.hfe_min, Unit::number, 6),
+                                          format_quantity(*typ, Unit::number, 6)));
         }
     }
     return g;
@@ -43,8 +45,9 @@ RdsOnPoint read_rds_point(ObjectReader& pr) {
     if (auto typ = pr.quantity("typ", Unit::ohm)) {
         p.typ_ohm = pr.within("typ", pr.positive("typ", *typ), 1e-4, 1e4);
         if (*typ > p.max_ohm) {
-            pr.fail_at("typ", fmt::format("expected a typical Rds(on) of at most the maximum {}, got {}",
-                                          format_quantity(p.max_ohm, Unit::ohm, 6), format_quantity(*typ, Unit::ohm, 6)));
+            pr.fail_at("typ",
+                       fmt::format("expected a typical Rds(on) of at most the maximum {}, got {}",
+                                   format_quantity(p.max_ohm, Unit::ohm, 6), format_quantity(*typ, Unit::ohm, 6)));
         }
     }
     return p;
@@ -56,9 +59,12 @@ Bipolar read_bipolar(ObjectReader& r, RecordPlace place) {
     Bipolar p;
     p.id = read_id(r);
     const std::string kind = r.required_text("kind", 32);
-    if (kind == "npn") p.kind = BipolarKind::npn;
-    else if (kind == "darlington") p.kind = BipolarKind::darlington;
-    else r.fail_at("kind", "expected \"npn\" or \"darlington\", got \"" + printable(kind) + "\"");
+    if (kind == "npn")
+        p.kind = BipolarKind::npn;
+    else if (kind == "darlington")
+        p.kind = BipolarKind::darlington;
+    else
+        r.fail_at("kind", "expected \"npn\" or \"darlington\", got \"" + printable(kind) + "\"");
     p.ic_max_a = r.within("ic_max", r.positive("ic_max", r.required("ic_max", Unit::ampere)), 1e-6, 1e3);
     p.vceo_v = voltage(r, "vceo", 1.0, 1e4);
     p.hfe_min = read_points<GainPoint>(r, "hfe_min", read_gain, true);
@@ -68,7 +74,8 @@ Bipolar read_bipolar(ObjectReader& r, RecordPlace place) {
     p.vbe_sat = read_points<SaturationPoint>(r, "vbe_sat", read_saturation, true);
     check_sorted(r, "vbe_sat", p.vbe_sat, [](const SaturationPoint& g) { return g.ic_a; });
     read_thermal(r, p.pd_w, p.rth_ja_k_per_w, p.tj_max_c);
-    if (auto v = r.quantity("hfe_temp_exponent", Unit::number)) p.hfe_temp_exponent = r.within("hfe_temp_exponent", *v, 0.0, 5.0);
+    if (auto v = r.quantity("hfe_temp_exponent", Unit::number))
+        p.hfe_temp_exponent = r.within("hfe_temp_exponent", *v, 0.0, 5.0);
     if (auto v = r.quantity("r_be_internal", Unit::ohm)) {
         p.r_be_internal_ohm = r.within("r_be_internal", r.positive("r_be_internal", *v), 10.0, 1e6);
     }
@@ -91,19 +98,23 @@ Mosfet read_mosfet(ObjectReader& r, RecordPlace place) {
         m.vgs_th_min_v = voltage(tr, "min", 0.05, 20.0);
         m.vgs_th_max_v = voltage(tr, "max", 0.05, 20.0);
         if (m.vgs_th_max_v < m.vgs_th_min_v) {
-            tr.fail_at("max", fmt::format("expected at least vgs_th.min {}, got {}", format_quantity(m.vgs_th_min_v, Unit::volt, 6),
+            tr.fail_at("max", fmt::format("expected at least vgs_th.min {}, got {}",
+                                          format_quantity(m.vgs_th_min_v, Unit::volt, 6),
                                           format_quantity(m.vgs_th_max_v, Unit::volt, 6)));
         }
         tr.finish();
     }
     m.rds_on = read_points<RdsOnPoint>(r, "rds_on", read_rds_point, true);
-    check_sorted(r, "rds_on", m.rds_on, [](const RdsOnPoint& p) { return p.vgs_v; }, "gate voltage");
-    if (auto v = r.quantity("rds_on_tempco", Unit::per_kelvin)) m.rds_on_tempco_per_k = r.within("rds_on_tempco", *v, 0.0, 0.05);
+    check_sorted(
+        r, "rds_on", m.rds_on, [](const RdsOnPoint& p) { return p.vgs_v; }, "gate voltage");
+    if (auto v = r.quantity("rds_on_tempco", Unit::per_kelvin))
+        m.rds_on_tempco_per_k = r.within("rds_on_tempco", *v, 0.0, 0.05);
     if (auto v = r.quantity("vgs_th_tempco", Unit::volt_per_kelvin)) {
         m.vgs_th_tempco_v_per_k = r.within("vgs_th_tempco", std::abs(*v), 0.0, 0.05);
     }
     m.qg_c = r.within("qg", r.positive("qg", r.required("qg", Unit::coulomb)), 1e-12, 1e-5);
-    if (auto v = r.quantity("vplateau", Unit::volt)) m.vplateau_v = r.within("vplateau", r.positive("vplateau", *v), 0.1, 20.0);
+    if (auto v = r.quantity("vplateau", Unit::volt))
+        m.vplateau_v = r.within("vplateau", r.positive("vplateau", *v), 0.1, 20.0);
     read_thermal(r, m.pd_w, m.rth_ja_k_per_w, m.tj_max_c);
     if (auto v = r.quantity("ear", Unit::joule)) m.ear_j = r.within("ear", r.positive("ear", *v), 1e-9, 100.0);
     read_origin(r, m, place);
@@ -116,13 +127,17 @@ ArrayPart read_array(ObjectReader& r, RecordPlace place) {
     const std::string kind = r.required_text("kind", 32);
     if (kind != "array") r.fail_at("kind", "expected \"array\", got \"" + printable(kind) + "\"");
     const std::string structure = r.text("structure", 32).value_or("darlington");
-    if (structure == "darlington") a.structure = ArrayStructure::darlington;
-    else if (structure == "mosfet") a.structure = ArrayStructure::mosfet;
-    else r.fail_at("structure", "expected \"darlington\" or \"mosfet\", got \"" + printable(structure) + "\"");
+    if (structure == "darlington")
+        a.structure = ArrayStructure::darlington;
+    else if (structure == "mosfet")
+        a.structure = ArrayStructure::mosfet;
+    else
+        r.fail_at("structure", "expected \"darlington\" or \"mosfet\", got \"" + printable(structure) + "\"");
     const double channels = r.within("channels", r.required("channels", Unit::number), 1.0, 64.0);
     if (channels != std::floor(channels)) r.fail_at("channels", "expected a whole number of channels");
     a.channels = static_cast<int>(channels);
-    a.input_resistor_ohm = r.within("input_resistor", r.positive("input_resistor", r.required("input_resistor", Unit::ohm)), 1.0, 1e6);
+    a.input_resistor_ohm =
+        r.within("input_resistor", r.positive("input_resistor", r.required("input_resistor", Unit::ohm)), 1.0, 1e6);
     if (auto v = r.quantity("input_resistor_tolerance", Unit::ratio)) {
         a.input_resistor_tolerance = r.fraction("input_resistor_tolerance", *v, 0.0, 0.5, true);
     }
@@ -132,7 +147,8 @@ ArrayPart read_array(ObjectReader& r, RecordPlace place) {
     a.vceo_v = voltage(r, "vceo", 1.0, 1e4);
     {
         const Json* dj = r.get("diode");
-        if (!dj) r.fail_at("diode", "missing; expected the built-in clamp diode { \"vf\": [...], \"if_max\": \"500mA\" }");
+        if (!dj)
+            r.fail_at("diode", "missing; expected the built-in clamp diode { \"vf\": [...], \"if_max\": \"500mA\" }");
         ObjectReader dr(*dj, r.origin(), r.path_of("diode"));
         a.diode.id = a.id + " (built-in diode)";
         a.diode.kind = DiodeKind::rectifier;

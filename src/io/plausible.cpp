@@ -61,8 +61,8 @@ double plausible(const ObjectReader& r, const std::string& key, double value, Pl
     const PlausibleRange& range = plausible_range(field);
     if (value >= range.lo && value <= range.hi) return value;
     const std::string hint = std::isfinite(value) ? plausible_suggestion(value, range) : std::string();
-    r.fail_at(key, fmt::format("{} is not a plausible {} ({} to {}){}", format_quantity(value, range.unit, 6), range.noun,
-                               format_quantity(range.lo, range.unit), format_quantity(range.hi, range.unit),
+    r.fail_at(key, fmt::format("{} is not a plausible {} ({} to {}){}", format_quantity(value, range.unit, 6),
+                               range.noun, format_quantity(range.lo, range.unit), format_quantity(range.hi, range.unit),
                                hint.empty() ? std::string() : "; did you mean " + hint + "?"));
 }
 

@@ -7,9 +7,7 @@
 namespace coilfit::io {
 namespace {
 
-Json number_or_null(const std::optional<double>& v) {
-    return v && std::isfinite(*v) ? Json(*v) : Json(nullptr);
-}
+Json number_or_null(const std::optional<double>& v) { return v && std::isfinite(*v) ? Json(*v) : Json(nullptr); }
 
 }  // namespace
 
@@ -22,8 +20,10 @@ Json check_to_json(const Check& c) {
     cj["unit"] = unit_symbol(c.unit);
     cj["margin"] = number_or_null(c.margin);
     cj["message"] = c.message;
-    if (c.verdict == Verdict::skip) cj["reason"] = c.reason;
-    else cj["corner"] = c.corner == Corner::cold ? "cold" : "hot";
+    if (c.verdict == Verdict::skip)
+        cj["reason"] = c.reason;
+    else
+        cj["corner"] = c.corner == Corner::cold ? "cold" : "hot";
     if (c.beyond_data) cj["beyond_data"] = true;
     return cj;
 }

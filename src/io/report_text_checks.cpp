@@ -47,10 +47,14 @@ std::string compared(const Check& c, const Spec& spec) {
 
 std::string verdict_word(Verdict v) {
     switch (v) {
-    case Verdict::pass: return "pass";
-    case Verdict::warn: return "WARN";
-    case Verdict::fail: return "FAIL";
-    case Verdict::skip: return "skip";
+        case Verdict::pass:
+            return "pass";
+        case Verdict::warn:
+            return "WARN";
+        case Verdict::fail:
+            return "FAIL";
+        case Verdict::skip:
+            return "skip";
     }
     return "";
 }
@@ -70,9 +74,12 @@ std::string fix_words(const Check& c) {
     int depth = 0;
     for (std::size_t i = 0; i + 1 < c.message.size(); ++i) {
         const char ch = c.message[i];
-        if (ch == '(') ++depth;
-        else if (ch == ')' && depth > 0) --depth;
-        else if (ch == ':' && c.message[i + 1] == ' ' && depth == 0) return c.message.substr(i + 2);
+        if (ch == '(')
+            ++depth;
+        else if (ch == ')' && depth > 0)
+            --depth;
+        else if (ch == ':' && c.message[i + 1] == ' ' && depth == 0)
+            return c.message.substr(i + 2);
     }
     return {};
 }
@@ -111,11 +118,14 @@ std::string stacked(const std::vector<Row>& rows, const TextStyle& style) {
         out += "  " + c.id + "  " + paint(verdict_word(c.verdict), c.verdict, style) + "\n";
         out += "    " + wrap(r.what, style.width, 4) + "\n";
         if (!r.value.empty() || !r.limit.empty()) {
-            out += "    " + wrap(fmt::format("{}{}{}", r.value, r.limit.empty() ? "" : " against " + r.limit,
-                                             r.margin.empty() ? "" : ", margin " + r.margin),
-                             style.width, 4) + "\n";
+            out += "    " +
+                   wrap(fmt::format("{}{}{}", r.value, r.limit.empty() ? "" : " against " + r.limit,
+                                    r.margin.empty() ? "" : ", margin " + r.margin),
+                        style.width, 4) +
+                   "\n";
         }
-        if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) out += "    " + fix_line(c, style.width, 4) + "\n";
+        if (c.verdict == Verdict::fail || c.verdict == Verdict::warn)
+            out += "    " + fix_line(c, style.width, 4) + "\n";
     }
     return out;
 }
@@ -151,15 +161,18 @@ std::string checks_section(const SizingReport& report, const TextStyle& style) {
     // Room for what it compared beside the numbers, else on a line of its own under them.
     const bool beside = fixed + 28 <= style.width;
     constexpr std::size_t indent = 8;
-    out += "  " + pad_right("", 4) + "  " + pad_right("check", iw) + "  " + pad_left("value", vw) + "  " + pad_left("limit", lw) + "  " +
-           pad_left("margin", mw) + (beside ? "  compared" : "") + "\n";
+    out += "  " + pad_right("", 4) + "  " + pad_right("check", iw) + "  " + pad_left("value", vw) + "  " +
+           pad_left("limit", lw) + "  " + pad_left("margin", mw) + (beside ? "  compared" : "") + "\n";
     for (const Row& r : rows) {
         const Check& c = *r.check;
-        std::string line = "  " + paint(pad_right(verdict_word(c.verdict), 4), c.verdict, style) + "  " + pad_right(c.id, iw) + "  " +
-                           pad_left(r.value, vw) + "  " + pad_left(r.limit, lw) + "  " + pad_left(r.margin, mw);
+        std::string line = "  " + paint(pad_right(verdict_word(c.verdict), 4), c.verdict, style) + "  " +
+                           pad_right(c.id, iw) + "  " + pad_left(r.value, vw) + "  " + pad_left(r.limit, lw) + "  " +
+                           pad_left(r.margin, mw);
         if (c.verdict == Verdict::skip) line = "  " + paint("skip", c.verdict, style) + "  " + c.id;
-        if (beside) line = pad_right(line, fixed) + wrap(r.what, style.width, fixed);
-        else line += "\n" + std::string(indent, ' ') + wrap(r.what, style.width, indent);
+        if (beside)
+            line = pad_right(line, fixed) + wrap(r.what, style.width, fixed);
+        else
+            line += "\n" + std::string(indent, ' ') + wrap(r.what, style.width, indent);
         out += line + "\n";
         if (c.verdict == Verdict::fail || c.verdict == Verdict::warn) {
             out += std::string(indent, ' ') + fix_line(c, style.width, indent) + "\n";
@@ -180,8 +193,10 @@ std::string checks_brief(const SizingReport& report, const TextStyle& style, std
         }
         ++shown;
         std::string line = paint(verdict_word(c.verdict), c.verdict, style) + " " + c.id;
-        if (c.value && c.limit) line += fmt::format(": {} against {} ({})", qf(*c.value, c.unit), qf(*c.limit, c.unit), margin_text(c));
-        else line += ": " + compared(c, report.spec);
+        if (c.value && c.limit)
+            line += fmt::format(": {} against {} ({})", qf(*c.value, c.unit), qf(*c.limit, c.unit), margin_text(c));
+        else
+            line += ": " + compared(c, report.spec);
         out += "  " + wrap(line, style.width, 4) + "\n";
     }
     if (more) out += fmt::format("  ... and {} more (the full report: coilfit size without --brief)\n", more);

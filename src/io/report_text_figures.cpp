@@ -15,7 +15,9 @@ std::size_t group_of(std::string_view key) {
     const auto starts = [&](std::string_view p) { return key.rfind(p, 0) == 0; };
     if (starts("coil_") || starts("operate_voltage") || starts("release_current")) return 0;
     if (starts("transistor_power") || starts("junction_")) return 2;
-    if (starts("peak_") || starts("clamp_") || starts("stored_") || starts("diode_") || starts("zener_") || starts("avalanche_")) return 3;
+    if (starts("peak_") || starts("clamp_") || starts("stored_") || starts("diode_") || starts("zener_") ||
+        starts("avalanche_"))
+        return 3;
     if (starts("release_time") || starts("current_zero") || starts("operate_time")) return 4;
     return 1;  // the drive: gain, base or gate, pin
 }
@@ -40,7 +42,8 @@ std::string figures_section(const SizingReport& report, const TextStyle& style) 
             if (first) out += "  " + std::string(group_names[g]) + "\n";
             first = false;
             if (display_width(e.label) > label_w) {
-                out += "    " + wrap(e.label, style.width, 4) + "\n    " + pad_right("", label_w) + "  " + qf(e.value, e.unit) + "\n";
+                out += "    " + wrap(e.label, style.width, 4) + "\n    " + pad_right("", label_w) + "  " +
+                       qf(e.value, e.unit) + "\n";
             } else {
                 out += "    " + pad_right(e.label, label_w) + "  " + qf(e.value, e.unit) + "\n";
             }
@@ -56,21 +59,24 @@ std::string clamp_options_section(const SizingReport& report, const TextStyle& s
     for (const auto& o : report.clamp_options) ow = std::max(ow, display_width(o.label));
     const bool narrow = 4 + ow + std::size_t{33} + 11 > style.width;  // three 11-column cells and the last
     if (!narrow) {
-        out += "    " + pad_right("clamp", ow) + "  " + pad_left("peak Vce", 9) + "  " + pad_left("release", 9) + "  " + pad_left("energy", 9) +
-               "  in rating\n";
+        out += "    " + pad_right("clamp", ow) + "  " + pad_left("peak Vce", 9) + "  " + pad_left("release", 9) + "  " +
+               pad_left("energy", 9) + "  in rating\n";
     }
     for (const auto& o : report.clamp_options) {
         const std::string mark = o.chosen ? "  > " : "    ";
         const std::string peak = qf(o.peak_collector_v, Unit::volt);
-        const std::string release = o.release_time_s ? qf(*o.release_time_s, Unit::second) : std::string("not estimated");
+        const std::string release =
+            o.release_time_s ? qf(*o.release_time_s, Unit::second) : std::string("not estimated");
         const std::string energy = qf(o.clamp_energy_j, Unit::joule);
         if (narrow) {
             out += mark + o.label + "\n      " +
-                   wrap(fmt::format("peak {}, release {}, energy {}, {}", peak, release, energy, o.within_rating ? "within rating" : "beyond rating"),
-                        style.width, 6) + "\n";
+                   wrap(fmt::format("peak {}, release {}, energy {}, {}", peak, release, energy,
+                                    o.within_rating ? "within rating" : "beyond rating"),
+                        style.width, 6) +
+                   "\n";
         } else {
-            out += mark + pad_right(o.label, ow) + "  " + pad_left(peak, 9) + "  " + pad_left(release, 9) + "  " + pad_left(energy, 9) + "  " +
-                   (o.within_rating ? "yes" : "no") + "\n";
+            out += mark + pad_right(o.label, ow) + "  " + pad_left(peak, 9) + "  " + pad_left(release, 9) + "  " +
+                   pad_left(energy, 9) + "  " + (o.within_rating ? "yes" : "no") + "\n";
         }
     }
     return out + "  (> marks the clamp of this spec)\n\n";
@@ -82,8 +88,10 @@ std::string notes_section(const SizingReport& report, const TextStyle& style) {
     std::string defaults;
     std::vector<std::string> others;
     for (const auto& n : report.notes) {
-        if (n.rfind(default_prefix, 0) == 0) defaults += (defaults.empty() ? "" : "; ") + n.substr(default_prefix.size());
-        else others.push_back(n);
+        if (n.rfind(default_prefix, 0) == 0)
+            defaults += (defaults.empty() ? "" : "; ") + n.substr(default_prefix.size());
+        else
+            others.push_back(n);
     }
     if (defaults.empty() && others.empty()) return {};
     std::string out = heading("Notes");

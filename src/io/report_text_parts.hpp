@@ -13,7 +13,8 @@ namespace coilfit::io::text {
 [[nodiscard]] std::string qf(double v, Unit u);
 [[nodiscard]] std::string heading(std::string_view title);
 // "label  text" with the text wrapped under itself; the label column is `label_w` wide.
-[[nodiscard]] std::string labelled(std::string_view label, const std::string& text, const TextStyle& style, std::size_t label_w = 15);
+[[nodiscard]] std::string labelled(std::string_view label, const std::string& text, const TextStyle& style,
+                                   std::size_t label_w = 15);
 
 // "coilfit 0.1.0 - channel name", wrapped.
 [[nodiscard]] std::string title_line(const SizingReport& report, const TextStyle& style);

@@ -29,9 +29,10 @@ Json with_preset(const Json& obj, const std::string& kind, const PartsTable& tab
     const Preset* p = m.id ? table.find_preset(kind, *m.id) : nullptr;
     if (!p) {
         const auto near = nearest_ids(id.get<std::string>(), ids);
-        fail(origin, path + ".preset", fmt::format("no {} preset {} in the parts table{}; `coilfit parts {}` lists them", kind,
-                                                   describe(id), near.empty() ? std::string() : "; nearest: " + fmt::format("{}", fmt::join(near, ", ")),
-                                                   kind));
+        fail(
+            origin, path + ".preset",
+            fmt::format("no {} preset {} in the parts table{}; `coilfit parts {}` lists them", kind, describe(id),
+                        near.empty() ? std::string() : "; nearest: " + fmt::format("{}", fmt::join(near, ", ")), kind));
     }
     Json merged = p->fields;
     for (const auto& [k, v] : obj.items()) merged[k] = v;
@@ -46,9 +47,11 @@ void read_supply(ObjectReader& r, Spec& s) {
         sup.min_v = plausible(r, "min", r.positive("min", r.required("min", Unit::volt)), Plausible::supply_voltage);
         sup.max_v = plausible(r, "max", r.positive("max", r.required("max", Unit::volt)), Plausible::supply_voltage);
         if (*sup.min_v > *sup.max_v) {
-            r.fail_at("min", fmt::format("expected at most supply.max {}, got {}", volts(*sup.max_v), volts(*sup.min_v)));
+            r.fail_at("min",
+                      fmt::format("expected at most supply.max {}, got {}", volts(*sup.max_v), volts(*sup.min_v)));
         }
-        if (r.has("tolerance")) r.fail_at("tolerance", "given with supply.min and supply.max; give the band or a tolerance");
+        if (r.has("tolerance"))
+            r.fail_at("tolerance", "given with supply.min and supply.max; give the band or a tolerance");
         if (auto v = r.quantity("voltage", Unit::volt)) {
             sup.voltage_v = plausible(r, "voltage", r.positive("voltage", *v), Plausible::supply_voltage);
             if (sup.voltage_v < *sup.min_v || sup.voltage_v > *sup.max_v) {
@@ -58,9 +61,12 @@ void read_supply(ObjectReader& r, Spec& s) {
         }
         sup.tolerance = 0;
     } else {
-        sup.voltage_v = plausible(r, "voltage", r.positive("voltage", r.required("voltage", Unit::volt)), Plausible::supply_voltage);
-        if (auto t = r.quantity("tolerance", Unit::ratio)) sup.tolerance = r.fraction("tolerance", *t, 0.0, 0.5, true);
-        else s.defaults_used.push_back("supply.tolerance " + percent_words(sup.tolerance));
+        sup.voltage_v = plausible(r, "voltage", r.positive("voltage", r.required("voltage", Unit::volt)),
+                                  Plausible::supply_voltage);
+        if (auto t = r.quantity("tolerance", Unit::ratio))
+            sup.tolerance = r.fraction("tolerance", *t, 0.0, 0.5, true);
+        else
+            s.defaults_used.push_back("supply.tolerance " + percent_words(sup.tolerance));
     }
     if (auto v = r.quantity("transient_max", Unit::volt)) {
         sup.transient_max_v = r.within("transient_max", r.positive("transient_max", *v), 0.1, 1e4);
@@ -72,12 +78,17 @@ void read_supply(ObjectReader& r, Spec& s) {
 }
 
 void read_ambient(ObjectReader& r, Spec& s) {
-    if (auto v = r.quantity("min", Unit::celsius)) s.ambient.min_c = temperature(r, "min", *v);
-    else s.defaults_used.push_back(fmt::format("ambient.min {:g} °C", s.ambient.min_c));
-    if (auto v = r.quantity("max", Unit::celsius)) s.ambient.max_c = temperature(r, "max", *v);
-    else s.defaults_used.push_back(fmt::format("ambient.max {:g} °C", s.ambient.max_c));
+    if (auto v = r.quantity("min", Unit::celsius))
+        s.ambient.min_c = temperature(r, "min", *v);
+    else
+        s.defaults_used.push_back(fmt::format("ambient.min {:g} °C", s.ambient.min_c));
+    if (auto v = r.quantity("max", Unit::celsius))
+        s.ambient.max_c = temperature(r, "max", *v);
+    else
+        s.defaults_used.push_back(fmt::format("ambient.max {:g} °C", s.ambient.max_c));
     if (s.ambient.min_c > s.ambient.max_c) {
-        r.fail_at("min", fmt::format("expected at most ambient.max {}, got {}", format_quantity(s.ambient.max_c, Unit::celsius),
+        r.fail_at("min", fmt::format("expected at most ambient.max {}, got {}",
+                                     format_quantity(s.ambient.max_c, Unit::celsius),
                                      format_quantity(s.ambient.min_c, Unit::celsius)));
     }
 }
@@ -90,9 +101,10 @@ const Json* section(ObjectReader& top, const SpecDocument& d, const std::string&
     if (!j && required && d.origin.flags_only) return &empty;
     if (!j && required) {
         const char* example = key == "supply" ? R"({ "voltage": "12V", "tolerance": "10%" })"
-                              : key == "coil" ? R"({ "rated_voltage": "12V", "resistance": "400R", ... } or { "preset": ID })"
-                              : key == "pin"  ? R"({ "vdd": "3.3V", "max_current": "8mA", ... } or { "preset": ID })"
-                                              : R"({ "type": "diode", "diode": ID })";
+                              : key == "coil"
+                                  ? R"({ "rated_voltage": "12V", "resistance": "400R", ... } or { "preset": ID })"
+                              : key == "pin" ? R"({ "vdd": "3.3V", "max_current": "8mA", ... } or { "preset": ID })"
+                                             : R"({ "type": "diode", "diode": ID })";
         top.fail_at(key, fmt::format("missing; expected an object such as {}", example));
     }
     return j;
@@ -113,7 +125,8 @@ SpecDocument parse_spec_text(std::string_view text, const std::string& file) {
     SpecDocument d;
     d.origin.file = printable(file, 4096);  // a file name echoed in messages, escaped
     d.doc = parse_json(text, d.origin.file, max_spec_bytes, "a JSON object { \"schema\": \"coilfit.spec/1\", ... }");
-    if (!d.doc.is_object()) fail(d.origin, "", "expected a JSON object { \"schema\": \"coilfit.spec/1\", ... }, got " + describe(d.doc));
+    if (!d.doc.is_object())
+        fail(d.origin, "", "expected a JSON object { \"schema\": \"coilfit.spec/1\", ... }, got " + describe(d.doc));
     return d;
 }
 
@@ -144,7 +157,8 @@ void prune_clamp_fields(SpecDocument& d, const std::string& type) {
         if (key == "diode") return type != "none";
         if (key == "zener") return type == "diode_zener";
         if (key == "tvs") return type == "diode_tvs";
-        if (key == "resistor" || key == "resistor_tolerance" || key == "resistor_power") return type == "diode_resistor";
+        if (key == "resistor" || key == "resistor_tolerance" || key == "resistor_power")
+            return type == "diode_resistor";
         return true;
     };
     std::vector<std::string> drop;
@@ -159,9 +173,12 @@ void prune_clamp_fields(SpecDocument& d, const std::string& type) {
 // self_heating), unless a flag of this run set it.
 void prune_exclusive(SpecDocument& d, const std::string& dotted_path) {
     static const std::pair<const char*, const char*> exclusive[] = {
-        {"supply.min", "supply.tolerance"},       {"supply.max", "supply.tolerance"},
-        {"supply.tolerance", "supply.min"},       {"supply.tolerance", "supply.max"},
-        {"coil.thermal_resistance", "coil.self_heating"}, {"coil.self_heating", "coil.thermal_resistance"},
+        {"supply.min", "supply.tolerance"},
+        {"supply.max", "supply.tolerance"},
+        {"supply.tolerance", "supply.min"},
+        {"supply.tolerance", "supply.max"},
+        {"coil.thermal_resistance", "coil.self_heating"},
+        {"coil.self_heating", "coil.thermal_resistance"},
     };
     for (const auto& [set, drop] : exclusive) {
         if (dotted_path != set || d.origin.flags.count(drop) != 0) continue;
@@ -180,7 +197,8 @@ void prune_coil_fields(SpecDocument& d) {
     if (!coil) return;
     std::vector<std::string> drop;
     for (const auto& [key, value] : coil->items()) {
-        if (key != "self_heating" && key != "max_release_time" && d.origin.flags.count("coil." + key) == 0) drop.push_back(key);
+        if (key != "self_heating" && key != "max_release_time" && d.origin.flags.count("coil." + key) == 0)
+            drop.push_back(key);
     }
     for (const auto& key : drop) coil->erase(key);
 }
@@ -206,7 +224,8 @@ void set_field(SpecDocument& d, const std::string& dotted_path, Json value, cons
         if (child.is_null()) child = Json::object();
         // A table id given in the file ("transistor": "2N4401") replaced by a nested flag is
         // not possible; a string where an object is needed is reported by the reader.
-        if (!child.is_object()) fail(d.origin, path, "expected a JSON object here to set " + flag + " into, got " + describe(child));
+        if (!child.is_object())
+            fail(d.origin, path, "expected a JSON object here to set " + flag + " into, got " + describe(child));
         node = &child;
         start = dot + 1;
     }
@@ -219,7 +238,8 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
     const Json* schema = top.get("schema");
     if (!schema) top.fail_at("schema", fmt::format("missing; expected \"{}\"", spec_schema));
     if (!schema->is_string() || schema->get<std::string>() != spec_schema) {
-        top.fail_at("schema", fmt::format("expected \"{}\" (the schema this coilfit reads), got {}", spec_schema, describe(*schema)));
+        top.fail_at("schema", fmt::format("expected \"{}\" (the schema this coilfit reads), got {}", spec_schema,
+                                          describe(*schema)));
     }
     s.name = top.text("name", 200).value_or("");
     read_section(top, d, "supply", true, [&](ObjectReader& r) { read_supply(r, s); });
@@ -233,8 +253,10 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
         // The relay's coil fields, then the spec's `coil` fields beside it win.
         Json merged = relay->coil_fields;
         if (const Json* j = top.get("coil")) {
-            if (!j->is_object()) fail(d.origin, "coil", "expected an object of coil fields beside relay, got " + describe(*j));
-            if (j->contains("preset")) fail(d.origin, "coil.preset", "given with relay; the relay's record fills the coil");
+            if (!j->is_object())
+                fail(d.origin, "coil", "expected an object of coil fields beside relay, got " + describe(*j));
+            if (j->contains("preset"))
+                fail(d.origin, "coil.preset", "given with relay; the relay's record fills the coil");
             for (const auto& [k, v] : j->items()) merged[k] = v;
         }
         ObjectReader r(merged, d.origin, "coil");
@@ -258,7 +280,8 @@ Spec read_spec(const SpecDocument& d, const PartsTable& table) {
     if (s.array() && !top.has("clamp")) {
         (void)top.get("clamp");
         s.clamp.diode = s.array()->diode;
-        s.defaults_used.push_back("clamp: the array's built-in diode to its common pin (tie the common pin to the coil supply)");
+        s.defaults_used.push_back(
+            "clamp: the array's built-in diode to its common pin (tie the common pin to the coil supply)");
     } else {
         read_section(top, d, "clamp", true, [&](ObjectReader& r) { spec_parts::read_clamp(r, s, table); });
     }

@@ -32,8 +32,10 @@ Json coil_json(const CoilSpec& c) {
     coil["must_operate"] = c.must_operate;
     coil["must_release"] = c.must_release;
     if (c.must_operate_temp_c) coil["must_operate_temp"] = *c.must_operate_temp_c;
-    if (c.thermal_resistance_k_per_w) coil["thermal_resistance"] = *c.thermal_resistance_k_per_w;
-    else coil["self_heating"] = c.self_heating_k.value_or(defaults::self_heating_k);
+    if (c.thermal_resistance_k_per_w)
+        coil["thermal_resistance"] = *c.thermal_resistance_k_per_w;
+    else
+        coil["self_heating"] = c.self_heating_k.value_or(defaults::self_heating_k);
     if (c.max_temperature_c) coil["max_temperature"] = *c.max_temperature_c;
     if (c.inductance_h) coil["inductance"] = *c.inductance_h;
     if (c.max_voltage_v) coil["max_voltage"] = *c.max_voltage_v;

@@ -85,12 +85,15 @@ void bm_yield(benchmark::State& state, Distribution distribution, ConditionsMode
 }
 // The default: conditions held at each check's worst corner (both ambient corners per sample).
 BENCHMARK_CAPTURE(bm_yield, uniform, Distribution::uniform, ConditionsMode::worst)
-    ->Name("yield/one_core/uniform")->Unit(benchmark::kMillisecond);
+    ->Name("yield/one_core/uniform")
+    ->Unit(benchmark::kMillisecond);
 BENCHMARK_CAPTURE(bm_yield, normal, Distribution::normal, ConditionsMode::worst)
-    ->Name("yield/one_core/normal")->Unit(benchmark::kMillisecond);
+    ->Name("yield/one_core/normal")
+    ->Unit(benchmark::kMillisecond);
 // --conditions sampled (edition 1's yield): one ambient per sample.
 BENCHMARK_CAPTURE(bm_yield, sampled, Distribution::uniform, ConditionsMode::sampled)
-    ->Name("yield/one_core/uniform_sampled")->Unit(benchmark::kMillisecond);
+    ->Name("yield/one_core/uniform_sampled")
+    ->Unit(benchmark::kMillisecond);
 
 void bm_yield_all_cores(benchmark::State& state) {
     const Fixture& f = fixture();
@@ -101,7 +104,8 @@ void bm_yield_all_cores(benchmark::State& state) {
         YieldResult r = run_yield(f.spec, settings);
         benchmark::DoNotOptimize(r);
     }
-    state.SetItemsProcessed(static_cast<std::int64_t>(state.iterations()) * static_cast<std::int64_t>(settings.samples));
+    state.SetItemsProcessed(static_cast<std::int64_t>(state.iterations()) *
+                            static_cast<std::int64_t>(settings.samples));
     state.counters["jobs"] = settings.jobs;
 }
 BENCHMARK(bm_yield_all_cores)->Name("yield/all_cores")->Unit(benchmark::kMillisecond)->UseRealTime();
@@ -137,7 +141,8 @@ void run_process(const std::vector<std::string>& argv) {
 }
 
 void bm_process_size(benchmark::State& state) {
-    const std::vector<std::string> argv{COILFIT_BENCH_EXE, "size", COILFIT_BENCH_SPEC, "--parts", COILFIT_BENCH_PARTS_DIR};
+    const std::vector<std::string> argv{COILFIT_BENCH_EXE, "size", COILFIT_BENCH_SPEC, "--parts",
+                                        COILFIT_BENCH_PARTS_DIR};
     for (auto _ : state) run_process(argv);
 }
 BENCHMARK(bm_process_size)->Name("process/coilfit_size")->Unit(benchmark::kMillisecond)->UseRealTime();
@@ -174,7 +179,8 @@ void bm_board_read(benchmark::State& state) {
 BENCHMARK(bm_board_read)->Name("board/read_and_size_64")->Unit(benchmark::kMillisecond);
 
 void bm_process_board(benchmark::State& state) {
-    const std::vector<std::string> argv{COILFIT_BENCH_EXE, "board", COILFIT_BENCH_BOARD, "--parts", COILFIT_BENCH_PARTS_DIR};
+    const std::vector<std::string> argv{COILFIT_BENCH_EXE, "board", COILFIT_BENCH_BOARD, "--parts",
+                                        COILFIT_BENCH_PARTS_DIR};
     for (auto _ : state) run_process(argv);
 }
 BENCHMARK(bm_process_board)->Name("process/coilfit_board_64")->Unit(benchmark::kMillisecond)->UseRealTime();
@@ -246,7 +252,8 @@ int main(int argc, char** argv) {
     if (has("process/coilfit_size") && has("process/bin_true")) {
         std::printf("  coilfit size, one process    %8.2f ms\n", s.at("process/coilfit_size") * 1e3);
         std::printf("  /bin/true, one process       %8.2f ms\n", s.at("process/bin_true") * 1e3);
-        std::printf("  ratio                        %8.1f x\n", s.at("process/coilfit_size") / s.at("process/bin_true"));
+        std::printf("  ratio                        %8.1f x\n",
+                    s.at("process/coilfit_size") / s.at("process/bin_true"));
     }
     return 0;
 }

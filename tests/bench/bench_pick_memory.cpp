@@ -89,7 +89,9 @@ int main(int argc, char** argv) {
         const struct {
             const char* name;
             PickSettings settings;
-        } modes[] = {{"--top 10", {10, false}}, {"all rows (one per driver)", {0, false}}, {"--all-clamps --top 10", {10, true}},
+        } modes[] = {{"--top 10", {10, false}},
+                     {"all rows (one per driver)", {0, false}},
+                     {"--all-clamps --top 10", {10, true}},
                      {"--all-clamps (streamed)", {0, true}}};
         for (const auto& m : modes) {
             const Run r = measure(spec, cat, m.settings);

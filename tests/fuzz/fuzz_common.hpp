@@ -40,7 +40,8 @@ inline void check_message(std::string_view message, std::string_view origin) {
     if (message.size() > 1000) finding("error message longer than 1000 bytes", message);
     if (!io::is_utf8(message)) finding("error message is not UTF-8", message);
     if (io::printable(message, message.size()) != message) finding("error message holds control characters", message);
-    if (!origin.empty() && message.substr(0, origin.size()) != origin) finding("error message does not name its origin", message);
+    if (!origin.empty() && message.substr(0, origin.size()) != origin)
+        finding("error message does not name its origin", message);
 }
 
 inline bool is_word_char(char c) {
@@ -113,8 +114,10 @@ inline void check_outputs(const Spec& original, const Catalogue& catalogue, bool
     if (with_pick) {
         const PickResult picked = pick(spec, catalogue);
         for (const Candidate& c : picked.candidates) {
-            if (!std::isfinite(c.worst_margin) || !std::isfinite(c.pin_current_max_a)) finding("non-finite pick figure", c.transistor);
-            if (c.base_resistor_ohm && !std::isfinite(*c.base_resistor_ohm)) finding("non-finite pick resistor", c.transistor);
+            if (!std::isfinite(c.worst_margin) || !std::isfinite(c.pin_current_max_a))
+                finding("non-finite pick figure", c.transistor);
+            if (c.base_resistor_ohm && !std::isfinite(*c.base_resistor_ohm))
+                finding("non-finite pick resistor", c.transistor);
         }
         for (const std::string& r : picked.reasons) check_text(r, "nan or inf in a pick reason");
     }

@@ -12,8 +12,8 @@ namespace {
 
 using coilfit::Unit;
 
-constexpr Unit all_units[] = {Unit::ratio,  Unit::number, Unit::volt,    Unit::ampere,  Unit::ohm,
-                              Unit::watt,   Unit::henry,  Unit::second,  Unit::hertz,   Unit::joule,
+constexpr Unit all_units[] = {Unit::ratio,   Unit::number,  Unit::volt,   Unit::ampere,         Unit::ohm,
+                              Unit::watt,    Unit::henry,   Unit::second, Unit::hertz,          Unit::joule,
                               Unit::coulomb, Unit::celsius, Unit::kelvin, Unit::kelvin_per_watt};
 
 void round_trip(double value, Unit unit) {
@@ -49,7 +49,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
         round_trip(value, unit);
         // Every format of the value is printable text, never "nan" or "inf".
         for (int digits = 1; digits <= 12; digits += 11) {
-            coilfit::fuzz::check_text(coilfit::format_quantity(value, unit, digits), "format_quantity printed nan or inf");
+            coilfit::fuzz::check_text(coilfit::format_quantity(value, unit, digits),
+                                      "format_quantity printed nan or inf");
         }
     }
     return 0;

@@ -39,7 +39,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
             coilfit::fuzz::finding("inconsistent yield figures", "");
         }
         for (const auto& c : y.checks) {
-            if (!std::isfinite(c.pass_rate) || c.failed > c.evaluated) coilfit::fuzz::finding("bad yield check figure", "");
+            if (!std::isfinite(c.pass_rate) || c.failed > c.evaluated)
+                coilfit::fuzz::finding("bad yield check figure", "");
         }
     }
     return 0;

@@ -14,9 +14,9 @@
 namespace coilfit {
 
 struct ArrayCorner {
-    Lookup vin_on{};   // input voltage that guarantees the output on at the corner's current
+    Lookup vin_on{};  // input voltage that guarantees the output on at the corner's current
     Lookup vce_sat{};
-    double pin_current_max_a = 0;  // (VDD_hi - vin_low) / (R_in (1 - t_in))
+    double pin_current_max_a = 0;        // (VDD_hi - vin_low) / (R_in (1 - t_in))
     double power_w = 0, junction_c = 0;  // one channel alone
 };
 

@@ -17,12 +17,12 @@ namespace coilfit {
 enum class BipolarCase : std::uint8_t { normal, no_resistor, pin_below_vbe, no_base_current };
 
 struct BipolarCorner {
-    double current_a = 0;        // the coil current that sizes the drive at this corner
+    double current_a = 0;  // the coil current that sizes the drive at this corner
     double thermal_ambient_c = 0;
-    double hfe_min = 0;          // at the corner's current and temperature
-    double hfe = 0;              // the sample's gain (minimum, or towards typical in a sample)
+    double hfe_min = 0;  // at the corner's current and temperature
+    double hfe = 0;      // the sample's gain (minimum, or towards typical in a sample)
     double forced_gain_policy = 0, vce_sat_test_ratio = 0, beta_target = 0;
-    bool policy_binds = false;   // the forced-gain policy, not the part's gain, sets the base current
+    bool policy_binds = false;  // the forced-gain policy, not the part's gain, sets the base current
     double base_current_required_a = 0, hfe_needed = 0;
     double vce_sat_v = 0, vbe_sat_v = 0, vbe_low_v = 0;
     double pulldown_current_a = 0;  // Vbe(sat) through the pull-down and any internal resistor

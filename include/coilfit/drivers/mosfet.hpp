@@ -34,12 +34,12 @@ struct HotRds {
 [[nodiscard]] double avalanche_energy_j(double l_h, double i0_a, double v_br_v, double vs_hi_v);
 
 struct MosfetCorner {
-    double vgs_lo_v = 0;    // the lowest gate voltage: pin at VDD_lo through Rg (+tb) and R_out, pull-down at -tb
-    double vgs_eff_v = 0;   // less the threshold's rise when cold
-    int rds_point = -1;     // the rds_on point used: the highest vgs at or below vgs_eff (-1: none)
-    double rds25_ohm = 0;   // its 25 °C value (maximum, or towards typical in a sample)
+    double vgs_lo_v = 0;   // the lowest gate voltage: pin at VDD_lo through Rg (+tb) and R_out, pull-down at -tb
+    double vgs_eff_v = 0;  // less the threshold's rise when cold
+    int rds_point = -1;    // the rds_on point used: the highest vgs at or below vgs_eff (-1: none)
+    double rds25_ohm = 0;  // its 25 °C value (maximum, or towards typical in a sample)
     double rds_operate_ohm = 0, junction_operate_c = 0;  // at the lowest-supply operate point
-    HotRds thermal{};       // at the thermal check's corner
+    HotRds thermal{};                                    // at the thermal check's corner
     double pin_peak_a = 0, pin_dc_a = 0;
     bool rds_beyond = false;  // the current lies above the rds_on point's test current
 };
@@ -50,7 +50,8 @@ struct MosfetFigures {
     double pulldown_ohm = 0;
     double gate_resistor_min_ohm = 0;  // the smallest the pin's current limit allows
     double vplateau_v = 0;
-    std::optional<double> gate_time_s;  // Qg (Rg + R_out) / (VDD_lo - Vplateau); none if the pin never passes the plateau
+    std::optional<double>
+        gate_time_s;  // Qg (Rg + R_out) / (VDD_lo - Vplateau); none if the pin never passes the plateau
 };
 
 struct MosfetDriver {

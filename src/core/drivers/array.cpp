@@ -15,7 +15,8 @@ ArrayDriver prepare_array(const Spec& spec, const ArrayPart& part) {
     d.derated_vceo_v = spec.policy.voltage_derating * part.vceo_v;
     d.tj_limit_c = part.tj_max_c - spec.policy.junction_margin_k;
     d.rth_k_per_w = rth_ja(part);
-    d.input_lo_ohm = part.input_resistor_ohm * (1.0 - part.input_resistor_tolerance.value_or(defaults::array_input_tolerance));
+    d.input_lo_ohm =
+        part.input_resistor_ohm * (1.0 - part.input_resistor_tolerance.value_or(defaults::array_input_tolerance));
     return d;
 }
 

@@ -22,7 +22,8 @@ constexpr double hfe_exponent_default = 1.5;
 // hFE_min(T) = hFE_min(25 °C) (T/298.15 K)^x below 25 °C; above it the 25 °C value.
 double gain_temperature_factor(const Bipolar& part, double ambient_c) {
     if (!(ambient_c < data_temp_c)) return 1.0;
-    return std::pow((ambient_c + kelvin_offset) / (data_temp_c + kelvin_offset), part.hfe_temp_exponent.value_or(hfe_exponent_default));
+    return std::pow((ambient_c + kelvin_offset) / (data_temp_c + kelvin_offset),
+                    part.hfe_temp_exponent.value_or(hfe_exponent_default));
 }
 
 double forced_gain_policy(const Spec& spec, const Bipolar& part, double test_ratio) {
@@ -109,7 +110,8 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
     const double vce_th = vce_th_lookup.value;
     if (rb_ohm > 0) {
         // Lowest base current: VDD_lo, Vbe(sat) max, Rb at +tb, behind R_out, less the pull-down.
-        f.base_current_min_a = (c.vdd_lo_v - f.vbe_sat_v) / (rb_ohm * c.rb_hi_factor + d.pin_r_out_ohm) - f.pulldown_current_a;
+        f.base_current_min_a =
+            (c.vdd_lo_v - f.vbe_sat_v) / (rb_ohm * c.rb_hi_factor + d.pin_r_out_ohm) - f.pulldown_current_a;
         f.saturates = f.base_current_min_a > 0;
         // Highest pin current: VDD_hi, Vbe low, Rb at -tb, R_out = 0.
         f.pin_current_max_a = std::max(0.0, c.vdd_hi_v - f.vbe_low_v) / (rb_ohm * c.rb_lo_factor);
@@ -142,7 +144,8 @@ void bipolar_corner(const BipolarDriver& d, const Spec& spec, const Conditions& 
     }
     f.junction_temp_c = in.thermal_ambient_c + f.transistor_power_w * d.rth_k_per_w;
     CheckValue thermal = at_most(f.junction_temp_c, d.tj_limit_c);
-    if (vce_th_lookup.side == Side::above || (rb_ohm > 0 && f.vbe_lookup.side == Side::above)) mark_beyond_data(thermal);
+    if (vce_th_lookup.side == Side::above || (rb_ohm > 0 && f.vbe_lookup.side == Side::above))
+        mark_beyond_data(thermal);
     checks.set(CheckId::transistor_thermal, thermal);
 
     common.on_drop_v = f.vce_sat_v;

@@ -89,7 +89,8 @@ void mosfet_corner(const MosfetDriver& d, const Spec& spec, const Conditions& c,
         f.pin_peak_a = c.vdd_hi_v / (rg_ohm * c.rb_lo_factor);
         f.pin_dc_a = c.vdd_hi_v / (rg_ohm * c.rb_lo_factor + rgs_lo);
         CheckValue pin = at_most(std::max(f.pin_peak_a, f.pin_dc_a), spec.pin.max_current_a);
-        pin.detail = static_cast<std::uint8_t>(f.pin_peak_a >= f.pin_dc_a ? GateCase::charge_peak : GateCase::pulldown_dc);
+        pin.detail =
+            static_cast<std::uint8_t>(f.pin_peak_a >= f.pin_dc_a ? GateCase::charge_peak : GateCase::pulldown_dc);
         checks.set(CheckId::pin_current, pin);
     } else {
         CheckValue pin = failed_without_value(spec.pin.max_current_a);
@@ -105,15 +106,16 @@ void mosfet_corner(const MosfetDriver& d, const Spec& spec, const Conditions& c,
         const double e_j = avalanche_energy_j(*spec.coil.inductance_h, in.thermal_current_a, m.vds_max_v, c.vs_hi_v);
         p_avalanche_w = std::isfinite(e_j) ? *spec.switching.frequency_hz * e_j : 0.0;
     }
-    f.thermal = hot_rds(in.thermal_current_a, f.rds25_ohm, d.tempco_per_k, in.thermal_ambient_c + p_avalanche_w * d.rth_k_per_w,
-                        d.rth_k_per_w);
+    f.thermal = hot_rds(in.thermal_current_a, f.rds25_ohm, d.tempco_per_k,
+                        in.thermal_ambient_c + p_avalanche_w * d.rth_k_per_w, d.rth_k_per_w);
     if (f.thermal.runaway) {
         checks.set(CheckId::transistor_thermal, failed_without_value(d.tj_limit_c));
     } else {
         f.thermal.power_w += p_avalanche_w;
         CheckValue thermal = at_most(f.thermal.junction_c, d.tj_limit_c);
         // Data limits: a current above the Rds(on) point's test current is its unsafe side.
-        if (f.rds_point >= 0 && in.thermal_current_a > m.rds_on[static_cast<std::size_t>(f.rds_point)].id_a * (1.0 + 1e-9)) {
+        if (f.rds_point >= 0 &&
+            in.thermal_current_a > m.rds_on[static_cast<std::size_t>(f.rds_point)].id_a * (1.0 + 1e-9)) {
             mark_beyond_data(thermal);
         }
         checks.set(CheckId::transistor_thermal, thermal);
