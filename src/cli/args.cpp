@@ -56,11 +56,7 @@ CLI::Validator one_of(const std::vector<std::string>& words) {
     return CLI::Validator(
         [words](std::string& s) -> std::string {
             if (std::find(words.begin(), words.end(), s) != words.end()) return std::string();
-            std::string list;
-            for (std::size_t i = 0; i < words.size(); ++i) {
-                list += (i == 0 ? "" : i + 1 == words.size() ? " or " : ", ") + words[i];
-            }
-            return "expected " + list + ", got \"" + s + "\"";
+            return "expected " + list_words(words) + ", got \"" + io::printable(s) + "\"";
         },
         "");
 }
@@ -314,13 +310,6 @@ std::vector<std::string> subcommand_names(const CLI::App& app) {
     return names;
 }
 
-std::string list_words(const std::vector<std::string>& words) {
-    std::string list;
-    for (std::size_t i = 0; i < words.size(); ++i)
-        list += (i == 0 ? "" : i + 1 == words.size() ? " or " : ", ") + words[i];
-    return list;
-}
-
 // The usage error in our words, for the command that was being read. `extras` are the words no
 // option took, in the order given.
 std::string usage_message(const CLI::ParseError& e, const CLI::App* sub, const std::vector<std::string>& extras) {
@@ -369,21 +358,8 @@ std::optional<int> parse_command_line(int argc, char** argv, Invocation& into) {
 
     // A first word that is no command: say so, and which command it may have meant.
     const std::vector<std::string> names = subcommand_names(app);
-    if (argc < 2 || argv[1][0] == '\0') {
-        std::cerr << "coilfit: error: no command given; expected " << list_words(names) << " (see coilfit --help)\n";
-        return exit_bad_input;
-    }
-    const std::string first = argv[1];
-    if (first.starts_with("-") && first != "-h" && first != "--help" && first != "--version") {
-        std::cerr << "coilfit: error: unknown option " << first << "; a command comes first: " << list_words(names)
-                  << " (see coilfit --help)\n";
-        return exit_bad_input;
-    }
-    if (!first.starts_with("-") && std::find(names.begin(), names.end(), first) == names.end()) {
-        const std::string near = nearest_word(first, names);
-        std::cerr << "coilfit: error: unknown command \"" << first << "\"; "
-                  << (near.empty() ? "expected " + list_words(names) : "did you mean " + near + "?")
-                  << " (see coilfit --help)\n";
+    if (const std::string problem = first_word_problem(names, argc, argv); !problem.empty()) {
+        std::cerr << "coilfit: error: " << problem << " (see coilfit --help)\n";
         return exit_bad_input;
     }
 

@@ -4,6 +4,7 @@
 
 #include "coilfit/id_match.hpp"
 #include "io/format.hpp"
+#include "io/json_read.hpp"
 
 namespace coilfit::cli {
 namespace {
@@ -85,6 +86,27 @@ std::string nearest_word(std::string_view word, std::span<const std::string> can
         }
     }
     return best;
+}
+
+std::string list_words(const std::vector<std::string>& words) {
+    std::string list;
+    for (std::size_t i = 0; i < words.size(); ++i)
+        list += (i == 0 ? "" : i + 1 == words.size() ? " or " : ", ") + words[i];
+    return list;
+}
+
+std::string first_word_problem(const std::vector<std::string>& names, int argc, char** argv) {
+    if (argc < 2 || argv[1][0] == '\0') return "no command given; expected " + list_words(names);
+    const std::string first = argv[1];
+    if (first.starts_with("-") && first != "-h" && first != "--help" && first != "--version") {
+        return "unknown option " + io::printable(first) + "; a command comes first: " + list_words(names);
+    }
+    if (!first.starts_with("-") && std::find(names.begin(), names.end(), first) == names.end()) {
+        const std::string near = nearest_word(first, names);
+        return "unknown command \"" + io::printable(first) + "\"; " +
+               (near.empty() ? "expected " + list_words(names) : "did you mean " + near + "?");
+    }
+    return {};
 }
 
 }  // namespace coilfit::cli

@@ -35,6 +35,12 @@ struct HelpScreen {
 
 // The candidate a mistyped word most likely meant: the only one it is the start of, else the
 // nearest within an edit distance of a third of its length (at least 1); "" when none is near.
+// "a, b or c".
+[[nodiscard]] std::string list_words(const std::vector<std::string>& words);
+// What is wrong with the first word of the command line (no command, an option before the
+// command, an unknown command with the nearest one); empty when it names a command or asks for
+// help or the version.
+[[nodiscard]] std::string first_word_problem(const std::vector<std::string>& names, int argc, char** argv);
 [[nodiscard]] std::string nearest_word(std::string_view word, std::span<const std::string> candidates);
 
 }  // namespace coilfit::cli
