@@ -4,6 +4,7 @@
 
 #include "io/board_io.hpp"
 #include "io/format.hpp"
+#include "io/report_text_parts.hpp"
 
 namespace coilfit::io {
 namespace {
@@ -16,19 +17,7 @@ std::string margin_text(const std::optional<double>& m) {
     return fmt::format("{:+.0f} %", *m * 100.0);
 }
 
-std::string verdict_word(Verdict v) {
-    switch (v) {
-        case Verdict::pass:
-            return "pass";
-        case Verdict::warn:
-            return "WARN";
-        case Verdict::fail:
-            return "FAIL";
-        case Verdict::skip:
-            return "-";
-    }
-    return "";
-}
+using text::verdict_word;
 
 // A table: rows of cells, the last cell the verdict (painted), columns padded to their widest.
 struct Table {

@@ -45,20 +45,6 @@ std::string compared(const Check& c, const Spec& spec) {
     return c.id;
 }
 
-std::string verdict_word(Verdict v) {
-    switch (v) {
-        case Verdict::pass:
-            return "pass";
-        case Verdict::warn:
-            return "WARN";
-        case Verdict::fail:
-            return "FAIL";
-        case Verdict::skip:
-            return "skip";
-    }
-    return "";
-}
-
 // The reason a check was skipped, without the "not checked: " the JSON message starts with.
 std::string skip_words(const Check& c) {
     std::string r = c.reason.empty() ? c.message : c.reason;
@@ -131,6 +117,20 @@ std::string stacked(const std::vector<Row>& rows, const TextStyle& style) {
 }
 
 }  // namespace
+
+std::string verdict_word(Verdict v) {
+    switch (v) {
+        case Verdict::pass:
+            return "pass";
+        case Verdict::warn:
+            return "WARN";
+        case Verdict::fail:
+            return "FAIL";
+        case Verdict::skip:
+            return "skip";
+    }
+    return "";
+}
 
 bool in_checks_table(const Check&) { return true; }
 

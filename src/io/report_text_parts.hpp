@@ -31,6 +31,8 @@ namespace coilfit::io::text {
 // The failing and warning checks only, one line each (for --brief); at most `max_rows` rows.
 [[nodiscard]] std::string checks_brief(const SizingReport& report, const TextStyle& style, std::size_t max_rows);
 // "+12 %", "-277 % (3.8x the limit)".
+// "pass", "WARN", "FAIL", "skip": the verdict column of every text table.
+[[nodiscard]] std::string verdict_word(Verdict v);
 [[nodiscard]] std::string margin_text(const Check& c);
 // Whether a check is shown in the checks table (contact checks have their own section).
 [[nodiscard]] bool in_checks_table(const Check& c);
